@@ -1,0 +1,23 @@
+import { defineConfig } from "vitest/config";
+import { fileURLToPath } from "node:url";
+
+/** Resolution shared by every vitest config: the `@/` alias, and `server-only` as an empty module. */
+export const resolve = {
+  alias: {
+    "@": fileURLToPath(new URL(".", import.meta.url)),
+    "server-only": fileURLToPath(new URL("./tests/support/empty.ts", import.meta.url)),
+  },
+};
+
+/**
+ * Unit and reference-value tests: pure code, no database, run in parallel.
+ * Integration tests (tests/integration) use vitest.integration.config.ts,
+ * browser tests (tests/browser) use vitest.browser.config.ts.
+ */
+export default defineConfig({
+  resolve,
+  test: {
+    include: ["tests/unit/**/*.test.ts", "tests/reference/**/*.test.ts"],
+    environment: "node",
+  },
+});
