@@ -3,7 +3,7 @@ import tseslint from "typescript-eslint";
 
 const physicsFolders = ["lib/comfort/**", "lib/viewfactor/**", "lib/panels/**"];
 
-export default [
+const config = [
   { ignores: [".next/**", "node_modules/**", ".data/**", "drizzle/**", "next-env.d.ts", "test-results/**"] },
   ...nextConfig,
   ...tseslint.configs.recommended,
@@ -28,3 +28,5 @@ export default [
     },
   },
 ];
+
+export default config;
