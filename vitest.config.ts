@@ -19,5 +19,7 @@ export default defineConfig({
   test: {
     include: ["tests/unit/**/*.test.ts", "tests/reference/**/*.test.ts"],
     environment: "node",
+    // Some reference tables trace many rays; generous so a loaded CI machine does not time out.
+    testTimeout: 30_000,
   },
 });
