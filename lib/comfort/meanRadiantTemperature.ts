@@ -2,6 +2,8 @@
  * Mean radiant temperature of a person from angle factors and surface temperatures.
  */
 import { CELSIUS_TO_KELVIN_OFFSET_K } from "./constants";
+// The fourth-power average itself lives in one place, beside the view factors that feed it.
+import { fourthPowerMean } from "../viewfactor/meanRadiantTemperature";
 
 /** One enclosure surface seen by the person. */
 export interface AngleFactorPart {
@@ -48,20 +50,15 @@ export function meanRadiantTemperatureDetailed(
   if (parts.length === 0) {
     throw new RangeError("parts must contain at least one surface");
   }
-  let sum = 0;
-  let t4Sum = 0;
-  for (let i = 0; i < parts.length; i++) {
-    const part = parts[i] as Readonly<AngleFactorPart>;
-    checkPart(part, i);
-    const tK = part.temperatureC + CELSIUS_TO_KELVIN_OFFSET_K;
-    const t2 = tK * tK;
-    sum += part.angleFactor;
-    t4Sum += part.angleFactor * t2 * t2;
-  }
-  if (!(sum > 0)) {
+  parts.forEach(checkPart);
+  const { temperatureC, weightSum } = fourthPowerMean(
+    parts.map((p) => p.angleFactor),
+    parts.map((p) => p.temperatureC),
+  );
+  if (!(weightSum > 0)) {
     throw new RangeError("the angle factors must not all be 0");
   }
-  return { mrtC: Math.sqrt(Math.sqrt(t4Sum / sum)) - CELSIUS_TO_KELVIN_OFFSET_K, angleFactorSum: sum };
+  return { mrtC: temperatureC, angleFactorSum: weightSum };
 }
 
 /**
