@@ -1,10 +1,10 @@
 import nextConfig from "eslint-config-next/core-web-vitals";
 import tseslint from "typescript-eslint";
 
-const physicsFolders = ["lib/comfort/**", "lib/viewfactor/**", "lib/panels/**"];
+const physicsFolders = ["lib/comfort/**", "lib/viewfactor/**", "lib/panels/**", "lib/loads/**", "lib/energy/**"];
 
 const config = [
-  { ignores: [".next/**", "node_modules/**", ".data/**", "drizzle/**", "next-env.d.ts", "test-results/**"] },
+  { ignores: [".next/**", ".next-*/**", "node_modules/**", ".data/**", "drizzle/**", "next-env.d.ts", "test-results/**"] },
   ...nextConfig,
   ...tseslint.configs.recommended,
   {
@@ -21,7 +21,7 @@ const config = [
         {
           patterns: [
             { group: ["react", "react-*", "next", "next/*", "@/app/*", "@/components/*", "@/db/*", "drizzle-orm", "drizzle-orm/*", "mysql2", "mysql2/*", "server-only"], message: "Physics modules stay pure: no React, Next.js, database or app imports." },
-            { group: ["@/lib/*", "!@/lib/comfort", "!@/lib/comfort/*", "!@/lib/viewfactor", "!@/lib/viewfactor/*", "!@/lib/panels", "!@/lib/panels/*"], message: "Physics modules import only other physics modules." },
+            { group: ["@/lib/*", "!@/lib/comfort", "!@/lib/comfort/*", "!@/lib/viewfactor", "!@/lib/viewfactor/*", "!@/lib/panels", "!@/lib/panels/*", "!@/lib/loads", "!@/lib/loads/*", "!@/lib/energy", "!@/lib/energy/*"], message: "Physics modules import only other physics modules." },
           ],
         },
       ],

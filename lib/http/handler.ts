@@ -98,7 +98,9 @@ async function parseInput<P, Q, B>(req: NextRequest, ctx: RouteContext, spec: Sp
 }
 
 function respond(data: unknown, status: number): NextResponse {
-  if (data instanceof Response) return data as NextResponse;
+  if (data instanceof NextResponse) return data;
+  // A plain Response (e.g. a file body) is wrapped so cookies can still be refreshed on it.
+  if (data instanceof Response) return new NextResponse(data.body, { status: data.status, headers: data.headers });
   if (status === 204) return new NextResponse(null, { status });
   return NextResponse.json(data ?? {}, { status });
 }
