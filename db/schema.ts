@@ -17,7 +17,9 @@ import {
   varchar,
 } from "drizzle-orm/mysql-core";
 import { ROLES } from "@/lib/auth/roles";
+import type { ComputeResult } from "@/lib/compute/types";
 import type { Layout } from "@/lib/layout/schema";
+import type { ScenarioConditions } from "@/lib/scenarios/schema";
 
 const id = () => varchar("id", { length: 36 }).primaryKey().$defaultFn(() => crypto.randomUUID());
 const createdAt = () => datetime("created_at", { mode: "date", fsp: 3 }).notNull().default(sql`CURRENT_TIMESTAMP(3)`);
@@ -185,4 +187,66 @@ export const auditLog = mysqlTable(
     createdAt: createdAt(),
   },
   (t) => [index("audit_log_org_time_idx").on(t.organisationId, t.createdAt)],
+);
+
+/**
+ * Design conditions of a project (e.g. "Winter design"). `conditions` is validated by
+ * lib/scenarios/schema.ts on every write; `version` grows by one on every update so cached
+ * results of an older version are never served.
+ */
+export const scenarios = mysqlTable(
+  "scenarios",
+  {
+    id: id(),
+    projectId: varchar("project_id", { length: 36 })
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    name: varchar("name", { length: 80 }).notNull(),
+    conditions: json("conditions").$type<ScenarioConditions>().notNull(),
+    version: int("version").notNull().default(1),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [uniqueIndex("scenarios_project_name_unique").on(t.projectId, t.name)],
+);
+
+/** One cached comfort result per (project, revision, scenario, scenario version). */
+export const computeResults = mysqlTable(
+  "compute_results",
+  {
+    id: id(),
+    projectId: varchar("project_id", { length: 36 })
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    revision: int("revision").notNull(),
+    scenarioId: varchar("scenario_id", { length: 36 })
+      .notNull()
+      .references(() => scenarios.id, { onDelete: "cascade" }),
+    scenarioVersion: int("scenario_version").notNull(),
+    result: json("result").$type<ComputeResult>().notNull(),
+    computeMs: int("compute_ms").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("compute_results_key_unique").on(t.projectId, t.revision, t.scenarioId, t.scenarioVersion)],
+);
+
+/** Uploaded images (floor-plan underlays); the bytes live in lib/storage's directory. */
+export const uploads = mysqlTable(
+  "uploads",
+  {
+    id: id(),
+    organisationId: varchar("organisation_id", { length: 36 })
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    projectId: varchar("project_id", { length: 36 })
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    contentType: mysqlEnum("content_type", ["image/png", "image/jpeg"]).notNull(),
+    byteSize: int("byte_size").notNull(),
+    widthPx: int("width_px").notNull(),
+    heightPx: int("height_px").notNull(),
+    createdBy: varchar("created_by", { length: 36 }).references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("uploads_project_idx").on(t.projectId)],
 );

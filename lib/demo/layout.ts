@@ -6,7 +6,7 @@ import { LAYOUT_SCHEMA_VERSION, type Layout, type Panel, type Seat } from "@/lib
 
 const CEILING_M = 2.8;
 
-function ceilingPanel(id: string, label: string, roomId: string, x: number, y: number, louvered: boolean): Panel {
+function ceilingPanel(id: string, label: string, roomId: string, x: number, y: number, louvered: boolean, mode: Panel["mode"] = "heating"): Panel {
   return {
     id,
     label,
@@ -17,8 +17,9 @@ function ceilingPanel(id: string, label: string, roomId: string, x: number, y: n
     widthM: 1.2,
     lengthM: 2.4,
     mountingHeightM: null,
-    mode: "heating",
-    supply: { kind: "surface", surfaceTemperatureC: 34 },
+    mode,
+    // Heating panels run at 34 °C; the chilled panels at 17 °C, a little above a summer dew point.
+    supply: { kind: "surface", surfaceTemperatureC: mode === "heating" ? 34 : 17 },
     emissivity: 0.93,
     louver: louvered
       ? { openingAngleDeg: 180, minOpeningAngleDeg: 30, maxOpeningAngleDeg: 180, axisDeg: 0, finish: "diffuse", wallEmissivity: 0.9 }
@@ -33,11 +34,12 @@ function desk(id: string, label: string, x: number, y: number, facingDeg: number
 
 export function demoLayout(): Layout {
   const panels: Panel[] = [];
-  // Open office: 4 rows × 5 columns of ceiling panels; the two rows nearest the glass are louvered.
+  // Open office: 4 rows × 5 columns of ceiling panels; the two rows nearest the glass are louvered
+  // heating panels, the two core rows chilled panels (cooling).
   for (let row = 0; row < 4; row += 1) {
     for (let col = 0; col < 5; col += 1) {
       const n = row * 5 + col + 1;
-      panels.push(ceilingPanel(`panel-oo-${n}`, `OO-${String(n).padStart(2, "0")}`, "room-open", 1.8 + col * 3.6, 1.8 + row * 2.9, row < 2));
+      panels.push(ceilingPanel(`panel-oo-${n}`, `OO-${String(n).padStart(2, "0")}`, "room-open", 1.8 + col * 3.6, 1.8 + row * 2.9, row < 2, row < 2 ? "heating" : "cooling"));
     }
   }
   panels.push(ceilingPanel("panel-mt-1", "MT-01", "room-meeting", 21, 2, false), ceilingPanel("panel-mt-2", "MT-02", "room-meeting", 21, 4.2, false));

@@ -1,11 +1,18 @@
 import { z } from "zod";
 import { layoutSchema } from "@/lib/layout/schema";
 
+const projectName = z.string().trim().min(2, "use at least 2 characters").max(120);
+const projectDescription = z.string().trim().max(2000);
+
 export const projectInput = z.strictObject({
-  name: z.string().trim().min(2, "use at least 2 characters").max(120),
-  description: z.string().trim().max(2000).default(""),
+  name: projectName,
+  description: projectDescription.default(""),
 });
-export const projectPatch = projectInput.partial();
+/**
+ * Only the fields sent change. Built without `.default()`: `projectInput.partial()` would still
+ * fill a missing description with "" and so wipe it on every rename.
+ */
+export const projectPatch = z.strictObject({ name: projectName, description: projectDescription }).partial();
 
 export const saveLayoutInput = z.strictObject({
   /** The head revision the edit started from; a different head means someone saved meanwhile (409). */

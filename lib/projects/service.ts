@@ -80,7 +80,8 @@ export async function createProject(member: Member, input: ProjectInput, layout:
 }
 
 export async function updateProject(member: Member, projectId: string, patch: Partial<ProjectInput>): Promise<ProjectSummary> {
-  await getProject(member.organisationId, projectId);
+  const current = await getProject(member.organisationId, projectId);
+  if (Object.keys(patch).length === 0) return current;
   await getDb().transaction(async (tx) => {
     await tx.update(projects).set(patch).where(and(eq(projects.id, projectId), eq(projects.organisationId, member.organisationId)));
     await recordAudit(tx, { organisationId: member.organisationId, actorId: member.userId, action: "projects.update", targetType: "project", targetId: projectId, details: patch });
