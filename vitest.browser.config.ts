@@ -10,5 +10,7 @@ export default defineConfig({
     fileParallelism: false,
     testTimeout: 90_000,
     hookTimeout: 60_000,
+    // Vite's own BASE_URL ("/") would otherwise replace the app's address in the workers' env.
+    env: { BASE_URL: process.env.BASE_URL ?? "http://127.0.0.1:3100" },
   },
 });

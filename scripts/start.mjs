@@ -41,7 +41,7 @@ async function main() {
 
   const server = spawn(path.join(ROOT, "node_modules/.bin/next"), ["start", "-p", String(PORT), "-H", "127.0.0.1"], {
     cwd: ROOT,
-    env: { ...env, NODE_ENV: "production", SMTP_URL: smtpUrl },
+    env: { ...env, NODE_ENV: "production", SMTP_URL: smtpUrl, APP_URL: process.env.APP_URL ?? `http://127.0.0.1:${PORT}` },
     stdio: ["ignore", "inherit", "inherit"],
   });
   const stop = () => {

@@ -89,7 +89,7 @@ async function browserTests(env) {
   const baseUrl = `http://127.0.0.1:${APP_PORT}`;
   const server = spawn(bin("next"), ["start", "-p", String(APP_PORT), "-H", "127.0.0.1"], {
     cwd: ROOT,
-    env: { ...env, NODE_ENV: "production", SMTP_URL: `smtp://127.0.0.1:${smtp.port}` },
+    env: { ...env, NODE_ENV: "production", SMTP_URL: `smtp://127.0.0.1:${smtp.port}`, APP_URL: baseUrl },
     stdio: ["ignore", "ignore", "inherit"],
     detached: true,
   });

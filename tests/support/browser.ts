@@ -2,8 +2,7 @@
  * Browser-test support: Debian's Chromium through playwright-core (no browser download),
  * against the app at BASE_URL (scripts/test.mjs starts it on the test database).
  */
-import { mkdtempSync, mkdirSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { mkdirSync } from "node:fs";
 import path from "node:path";
 import { chromium, type Browser, type Page } from "playwright-core";
 import { DEMO_ACCOUNTS } from "@/lib/demo/accounts";
@@ -26,7 +25,8 @@ export async function launchBrowser(): Promise<Browser> {
       "--disable-component-update",
       "--disable-sync",
       "--disable-dev-shm-usage",
-      `--user-data-dir=${mkdtempSync(path.join(tmpdir(), "seatwise-chromium-"))}`,
+      // No --user-data-dir: playwright refuses it in launch() and gives every launch a fresh
+      // temporary profile of its own.
     ],
   });
 }
