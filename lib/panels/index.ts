@@ -54,3 +54,22 @@ export {
   type CondensationMarginInput,
   type CondensationMarginResult,
 } from "./condensationMargin";
+export {
+  WATER_SPECIFIC_HEAT_J_KGK,
+  WATER_DENSITY_KG_M3,
+  waterSpecificHeat,
+  waterDensity,
+  waterFlow,
+  outputFromWaterFlow,
+  flowReturnTemperatures,
+  waterSideForOutput,
+  waterSideForMeanWaterTemperature,
+  surfaceTemperatureForSpecificOutput,
+  type WaterProperty,
+  type WaterFlow,
+  type WaterFlowInput,
+  type FlowReturnTemperatures,
+  type WaterSideCommonInput,
+  type WaterSideOperatingPoint,
+  type SurfaceTemperatureForOutputInput,
+} from "./hydronics";
