@@ -73,3 +73,38 @@ export {
   type WaterSideOperatingPoint,
   type SurfaceTemperatureForOutputInput,
 } from "./hydronics";
+// Louvered panels (issue 5): cavity table, lookup, aperture model, directional emission, output curve.
+// Out-of-table angles are clamped and flagged (`withinTable`); a target behind the face gives NaN exit angle / `visible: false`.
+export {
+  buildLouverTable,
+  louverTableKey,
+  LOUVER_DEFAULT_STEP_DEG,
+  LOUVER_DEFAULT_MIN_DEG,
+  LOUVER_DEFAULT_MAX_DEG,
+  LOUVER_INTERPOLATION_TOLERANCE,
+  LOUVER_DEFAULT_RAYS,
+  LOUVER_DEFAULT_SEED,
+  LOUVER_TABLE_VERSION,
+  type LouverFinish,
+  type LouverTable,
+  type LouverTableParams,
+  type LouverTableSolver,
+} from "./louverTable";
+export { louverEmissivityAt, louverFaceEmissivityAt, type LouverEmissivity } from "./louverLookup";
+export { louverApertureShare, LOUVER_DEFAULT_APERTURE, type LouverAperture } from "./louverAperture";
+export {
+  louverExitAngleDeg,
+  louverDirectionalEmissivity,
+  louverEffectiveTemperatureC,
+  louverEmissivityToward,
+  type LouverEffectiveTemperatureInput,
+  type LouverToward,
+  type LouverTowardInput,
+} from "./louverDirection";
+export {
+  louverOutputCurve,
+  louverTurndownRatio,
+  zoneTurndownRatio,
+  type LouverOutputCurveInput,
+  type LouverOutputPoint,
+} from "./louverPerformance";
