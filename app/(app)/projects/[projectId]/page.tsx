@@ -44,12 +44,26 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
       <PageHeader
         title={project.name}
         actions={
-          <Link
-            href={`/projects/${project.id}/plan`}
-            className="rounded-md bg-accent px-3.5 py-2 text-sm font-medium text-white hover:bg-accent-strong"
-          >
-            Open plan
-          </Link>
+          <div className="flex flex-wrap gap-2">
+            <Link
+              href={`/projects/${project.id}/scenarios`}
+              className="rounded-md border border-line bg-white px-3.5 py-2 text-sm font-medium text-ink hover:border-accent hover:text-accent-strong"
+            >
+              Scenarios
+            </Link>
+            <Link
+              href={`/projects/${project.id}/results`}
+              className="rounded-md border border-line bg-white px-3.5 py-2 text-sm font-medium text-ink hover:border-accent hover:text-accent-strong"
+            >
+              Results
+            </Link>
+            <Link
+              href={`/projects/${project.id}/plan`}
+              className="rounded-md bg-accent px-3.5 py-2 text-sm font-medium text-white hover:bg-accent-strong"
+            >
+              Open plan
+            </Link>
+          </div>
         }
       >
         {project.description || "No description yet."}
