@@ -11,7 +11,8 @@ import { ObjectList } from "@/components/plan/object-list";
 import type { OverlayMode } from "@/components/plan/overlay-shapes";
 import { PlanCanvas, type PlanCanvasHandle } from "@/components/plan/plan-canvas";
 import { PropertiesPanel } from "@/components/plan/properties-panel";
-import { layoutQuery, runCompute, underlayUrl, type LayoutAtRevision } from "@/components/plan/queries";
+import { underlayUrl } from "@/components/plan/queries";
+import { headLayoutQuery, runCompute, type LayoutAtRevision } from "@/components/projects/queries";
 import { ResultsPanel, SeatDetail } from "@/components/plan/results-panel";
 import { RevisionsPanel } from "@/components/plan/revisions-panel";
 import { SaveDialog } from "@/components/plan/save-dialog";
@@ -136,7 +137,7 @@ export function PlanEditor({ projectId, projectName, initial, units, readOnly, c
     dispatch({ type: "load", layout: head.layout, revision: head.revision });
   }, []);
   const reload = useCallback(async () => {
-    const head = await queryClient.fetchQuery({ ...layoutQuery(projectId), staleTime: 0 });
+    const head = await queryClient.fetchQuery({ ...headLayoutQuery(projectId), staleTime: 0 });
     loadHead(head);
     setSaving(false);
     setSavedNote(`Loaded revision ${head.revision}.`);

@@ -1,33 +1,8 @@
 /**
- * The plan editor's client data: one `queryOptions()` per resource next to its fetcher, and the
- * mutations' fetchers. Every path is the public API documented in docs/api.md.
+ * The plan editor's own client data: the underlay image. Project resources (layout, revisions,
+ * scenarios, compute) are shared with the other screens in components/projects/queries.ts.
  */
-import { queryOptions } from "@tanstack/react-query";
-import { api, ApiError } from "@/lib/client/query";
-import type { ComputeResult } from "@/lib/compute/types";
-import type { Layout } from "@/lib/layout/schema";
-
-export interface LayoutAtRevision {
-  projectId: string;
-  revision: number;
-  headRevision: number;
-  message: string;
-  createdAt: string;
-  layout: Layout;
-}
-
-export interface RevisionSummary {
-  number: number;
-  message: string;
-  authorName: string | null;
-  createdAt: string;
-}
-
-export interface ScenarioSummary {
-  id: string;
-  name: string;
-  version: number;
-}
+import { ApiError } from "@/lib/client/query";
 
 export interface UploadedImage {
   imageId: string;
@@ -37,45 +12,6 @@ export interface UploadedImage {
 }
 
 const base = (projectId: string) => `/api/projects/${projectId}`;
-
-export const planKeys = {
-  layout: (projectId: string) => ["projects", projectId, "layout"] as const,
-  revisions: (projectId: string) => ["projects", projectId, "revisions"] as const,
-  scenarios: (projectId: string) => ["projects", projectId, "scenarios"] as const,
-};
-
-export function revisionsQuery(projectId: string) {
-  return queryOptions({
-    queryKey: planKeys.revisions(projectId),
-    queryFn: async () => (await api<{ revisions: RevisionSummary[] }>(`${base(projectId)}/revisions`)).revisions,
-  });
-}
-
-export function scenariosQuery(projectId: string) {
-  return queryOptions({
-    queryKey: planKeys.scenarios(projectId),
-    queryFn: async () => (await api<{ scenarios: ScenarioSummary[] }>(`${base(projectId)}/scenarios`)).scenarios,
-  });
-}
-
-export function layoutQuery(projectId: string) {
-  return queryOptions({
-    queryKey: planKeys.layout(projectId),
-    queryFn: () => api<LayoutAtRevision>(`${base(projectId)}/layout`),
-  });
-}
-
-export function saveLayout(projectId: string, body: { baseRevision: number; message: string; layout: Layout }): Promise<LayoutAtRevision> {
-  return api<LayoutAtRevision>(`${base(projectId)}/layout`, { method: "PUT", body });
-}
-
-export function restoreRevision(projectId: string, number: number, baseRevision: number): Promise<LayoutAtRevision> {
-  return api<LayoutAtRevision>(`${base(projectId)}/revisions/${number}/restore`, { method: "POST", body: { baseRevision } });
-}
-
-export function runCompute(projectId: string, body: { scenarioId: string; revision: number }): Promise<ComputeResult> {
-  return api<ComputeResult>(`${base(projectId)}/compute`, { method: "POST", body });
-}
 
 export function underlayUrl(projectId: string, imageId: string): string {
   return `${base(projectId)}/underlay/${encodeURIComponent(imageId)}`;

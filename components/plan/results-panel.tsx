@@ -3,7 +3,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import type { OverlayMode } from "@/components/plan/overlay-shapes";
-import { scenariosQuery } from "@/components/plan/queries";
+import { scenariosQuery } from "@/components/projects/queries";
 import { apiErrorMessage } from "@/components/ui/api-errors";
 import { Button } from "@/components/ui/button";
 import type { ComputeResult, SeatResult } from "@/lib/compute/types";

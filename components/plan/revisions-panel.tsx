@@ -1,7 +1,7 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { planKeys, restoreRevision, revisionsQuery, type LayoutAtRevision } from "@/components/plan/queries";
+import { projectKeys, restoreRevision, revisionsQuery, type LayoutAtRevision } from "@/components/projects/queries";
 import { apiErrorMessage } from "@/components/ui/api-errors";
 
 interface Props {
@@ -19,8 +19,8 @@ export function RevisionsPanel({ projectId, baseRevision, dirty, readOnly, onRes
   const restore = useMutation({
     mutationFn: (number: number) => restoreRevision(projectId, number, baseRevision),
     onSuccess: (head) => {
-      void queryClient.invalidateQueries({ queryKey: planKeys.revisions(projectId) });
-      queryClient.setQueryData(planKeys.layout(projectId), head);
+      void queryClient.invalidateQueries({ queryKey: projectKeys.revisions(projectId) });
+      queryClient.setQueryData(projectKeys.layout(projectId), head);
       onRestored(head);
     },
   });

@@ -5,7 +5,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useEffect, useRef, useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
-import { planKeys, saveLayout, type LayoutAtRevision } from "@/components/plan/queries";
+import { projectKeys, saveLayout, type LayoutAtRevision } from "@/components/projects/queries";
 import { Button } from "@/components/ui/button";
 import { FormField } from "@/components/ui/form-field";
 import { ApiError } from "@/lib/client/query";
@@ -36,8 +36,8 @@ export function SaveDialog({ projectId, layout, baseRevision, onClose, onSaved, 
   const save = useMutation({
     mutationFn: (vars: { message: string; baseRevision: number }) => saveLayout(projectId, { ...vars, layout }),
     onSuccess: (saved) => {
-      void queryClient.invalidateQueries({ queryKey: planKeys.revisions(projectId) });
-      queryClient.setQueryData(planKeys.layout(projectId), saved);
+      void queryClient.invalidateQueries({ queryKey: projectKeys.revisions(projectId) });
+      queryClient.setQueryData(projectKeys.layout(projectId), saved);
       onSaved(saved, layout);
     },
     onError: (error, vars) => {

@@ -8,7 +8,7 @@ import { InlineSelect } from "@/components/results/inline-select";
 import { apiErrorMessage } from "@/components/ui/api-errors";
 import { compareSeats } from "@/components/results/compare";
 import { num, pmvText } from "@/components/results/format";
-import { computeQuery, type Revision, type Scenario } from "@/components/results/queries";
+import { computeQuery, type RevisionSummary as Revision, type Scenario } from "@/components/projects/queries";
 import { unitSymbol, type UnitSystem } from "@/lib/units";
 
 interface Side {

@@ -13,7 +13,7 @@ import { ComputeProgress } from "@/components/results/compute-progress";
 import { PanelOutputChart } from "@/components/results/panel-output-chart";
 import { PanelsTable } from "@/components/results/panels-table";
 import { PmvDistributionChart } from "@/components/results/pmv-distribution-chart";
-import { computeQuery, layoutQuery, revisionsQuery, scenariosQuery } from "@/components/results/queries";
+import { computeQuery, layoutAtQuery, revisionsQuery, scenariosQuery } from "@/components/projects/queries";
 import { SeatsTable } from "@/components/results/seats-table";
 import { ZonesTable } from "@/components/results/zones-table";
 import { ApiError } from "@/lib/client/query";
@@ -72,7 +72,7 @@ export function ResultsView({
 
   const scenarioId = scenarioChoice || scenarios.data?.[0]?.id || "";
   const compute = useQuery({ ...computeQuery(projectId, requested?.scenarioId ?? "", requested?.revision ?? 0), enabled: requested !== null });
-  const layout = useQuery({ ...layoutQuery(projectId, requested?.revision ?? 0), enabled: requested !== null });
+  const layout = useQuery({ ...layoutAtQuery(projectId, requested?.revision ?? 0), enabled: requested !== null });
 
   const roomNames = useMemo(() => new Map(layout.data?.layout.rooms.map((r) => [r.id, r.name]) ?? []), [layout.data]);
   const roomName = (id: string) => roomNames.get(id) ?? id;

@@ -4,7 +4,7 @@ import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { apiErrorMessage } from "@/components/ui/api-errors";
-import { updateUnitSystem } from "@/components/results/queries";
+import { updateUnitSystem } from "@/components/settings/queries";
 import type { UnitSystem } from "@/lib/units";
 
 const OPTIONS: ReadonlyArray<{ value: UnitSystem; label: string; hint: string }> = [

@@ -1,12 +1,8 @@
 /**
  * How each number of the scenario form is shown and typed in the member's unit system. Stored
- * values are SI; lib/units converts temperatures and speeds. U-values are converted here
- * (lib/units has no such quantity): 1 W/(m²·K) = 0.17611 Btu/(h·ft²·°F), i.e. the W/m² to
- * Btu/(h·ft²) factor divided by 1.8 °F per K.
+ * values are SI; lib/units converts them (U-values included).
  */
-import { BTUH_FT2_PER_W_M2, fromDisplay, toDisplay, unitSymbol, type Quantity, type UnitSystem } from "@/lib/units";
-
-export const BTUH_FT2_F_PER_W_M2_K = BTUH_FT2_PER_W_M2 / 1.8;
+import { fromDisplay, toDisplay, unitSymbol, type Quantity, type UnitSystem } from "@/lib/units";
 
 export interface DisplayUnit {
   symbol: string;
@@ -26,14 +22,7 @@ export function quantityUnit(quantity: Quantity, system: UnitSystem, digits = 1)
 }
 
 export function uValueUnit(system: UnitSystem): DisplayUnit {
-  return system === "si"
-    ? { symbol: "W/(m²·K)", toDisplay: (si) => si, fromDisplay: (shown) => shown, digits: 2 }
-    : {
-        symbol: "Btu/(h·ft²·°F)",
-        toDisplay: (si) => si * BTUH_FT2_F_PER_W_M2_K,
-        fromDisplay: (shown) => shown / BTUH_FT2_F_PER_W_M2_K,
-        digits: 3,
-      };
+  return quantityUnit("uValue", system, system === "si" ? 2 : 3);
 }
 
 /** A display value as the form shows it: rounded to the unit's digits, without trailing zeros. */

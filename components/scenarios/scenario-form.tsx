@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/button";
 import { FormAlert } from "@/components/ui/form-alert";
 import { FormField } from "@/components/ui/form-field";
 import { applyApiError } from "@/components/ui/api-errors";
-import { createScenario, projectKeys, updateScenario, type Scenario } from "@/components/results/queries";
+import { createScenario, projectKeys, updateScenario, type Scenario } from "@/components/projects/queries";
 import { displayText, parseDisplay, quantityUnit, rangeText, uValueUnit, type DisplayUnit } from "@/components/scenarios/display-units";
 import { SURFACE_CLASSES, insideTemperatureC, type SurfaceKey } from "@/components/scenarios/surfaces";
 import { scenarioInput, type ScenarioInput, type SurfaceThermal } from "@/lib/scenarios/schema";

@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { DateTime } from "@/components/ui/date-time";
 import { SkeletonRows } from "@/components/ui/skeleton";
 import { apiErrorMessage } from "@/components/ui/api-errors";
-import { scenariosQuery, type Scenario } from "@/components/results/queries";
+import { scenariosQuery, type Scenario } from "@/components/projects/queries";
 import { ScenarioForm } from "@/components/scenarios/scenario-form";
 import { quantityUnit, displayText } from "@/components/scenarios/display-units";
 import { WINTER_DESIGN, type ScenarioInput } from "@/lib/scenarios/schema";
