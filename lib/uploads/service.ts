@@ -11,6 +11,18 @@ import { MAX_IMAGE_SIDE_PX, sniffImage, type ImageType } from "@/lib/uploads/ima
 /** Largest underlay image accepted, bytes (5 MiB). */
 export const MAX_UNDERLAY_BYTES = 5 * 1024 * 1024;
 
+function imageTooLarge(): AppError {
+  return new AppError("payload_too_large", `Images are limited to ${MAX_UNDERLAY_BYTES / (1024 * 1024)} MB.`);
+}
+
+/** How an underlay upload's multipart body is read (lib/uploads/multipart.ts). */
+export const UNDERLAY_UPLOAD_RULES = {
+  maxFileBytes: MAX_UNDERLAY_BYTES,
+  tooLarge: imageTooLarge,
+  missingFileMessage: "attach a PNG or JPEG image",
+  notMultipartMessage: "send the image as multipart/form-data",
+} as const;
+
 export interface StoredUnderlay {
   imageId: string;
   widthPx: number;
@@ -27,9 +39,7 @@ const EXT: Record<ImageType, "png" | "jpg"> = { "image/png": "png", "image/jpeg"
  */
 export async function saveUnderlay(member: Member, projectId: string, bytes: Uint8Array): Promise<StoredUnderlay> {
   await getProject(member.organisationId, projectId);
-  if (bytes.byteLength > MAX_UNDERLAY_BYTES) {
-    throw new AppError("payload_too_large", `Images are limited to ${MAX_UNDERLAY_BYTES / (1024 * 1024)} MB.`);
-  }
+  if (bytes.byteLength > MAX_UNDERLAY_BYTES) throw imageTooLarge();
   const image = sniffImage(bytes);
   if (!image) {
     throw new AppError("unsupported_media_type", `Only PNG or JPEG images (up to ${MAX_IMAGE_SIDE_PX} px a side) are accepted; the file's content is neither.`, [
