@@ -7,6 +7,7 @@ import { sql } from "drizzle-orm";
 import {
   boolean,
   datetime,
+  double,
   index,
   int,
   json,
@@ -249,4 +250,36 @@ export const uploads = mysqlTable(
     createdAt: createdAt(),
   },
   (t) => [index("uploads_project_idx").on(t.projectId)],
+);
+
+/**
+ * Panel products of an organisation's catalogue, imported from CSV (lib/catalogue). Sizes in m.
+ * The characteristic is the product's rated specific output q = K·ΔTⁿ per m² of panel face:
+ * `kWm2PerKn` is K in W/(m²·Kⁿ) and ΔT the mean water temperature minus the room air
+ * temperature in K (its magnitude when cooling); a panel of width × length m gives
+ * Q = K·width·length·ΔTⁿ W. The same convention as the layout's `characteristic`.
+ * The louver columns are all null for a plain panel, all set for a louvered one.
+ */
+export const panelProducts = mysqlTable(
+  "panel_products",
+  {
+    id: id(),
+    organisationId: varchar("organisation_id", { length: 36 })
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    name: varchar("name", { length: 120 }).notNull(),
+    widthM: double("width_m").notNull(),
+    lengthM: double("length_m").notNull(),
+    kWm2PerKn: double("k_w_m2_per_kn").notNull(),
+    n: double("n").notNull(),
+    emissivity: double("emissivity").notNull(),
+    louverMinDeg: double("louver_min_deg"),
+    louverMaxDeg: double("louver_max_deg"),
+    finish: mysqlEnum("finish", ["diffuse", "specular"]),
+    wallEmissivity: double("wall_emissivity"),
+    createdBy: varchar("created_by", { length: 36 }).references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [uniqueIndex("panel_products_org_name_unique").on(t.organisationId, t.name)],
 );

@@ -17,7 +17,9 @@ export type AuditAction =
   | "layouts.save"
   | "layouts.restore"
   | "scenarios.save"
-  | "seats.assign";
+  | "seats.assign"
+  | "catalogue.import"
+  | "catalogue.delete";
 
 export interface AuditEntry {
   organisationId: string | null;

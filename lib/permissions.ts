@@ -24,6 +24,8 @@ export const PERMISSIONS = {
   "layouts:write": PLANNERS,
   /** Create and edit design scenarios. */
   "scenarios:write": PLANNERS,
+  /** Import panel products into the organisation's catalogue and delete them (reading it is `projects:read`). */
+  "catalogue:write": PLANNERS,
   /** Run the comfort computation. */
   "compute:run": STAFF,
   /** Assign occupants to seats and manage seat records. */

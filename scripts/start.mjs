@@ -36,7 +36,8 @@ async function main() {
     log(`local SMTP fake on ${smtpUrl}; messages are printed here and kept in .data/mailbox/`);
   }
 
-  log("building (next build)…");
+  log("building the worker bundle and the app (next build)…");
+  if (run(process.execPath, ["scripts/build-workers.mjs"], { env }) !== 0) throw new Error("worker bundle failed");
   if (run(path.join(ROOT, "node_modules/.bin/next"), ["build"], { env }) !== 0) throw new Error("next build failed");
 
   const server = spawn(path.join(ROOT, "node_modules/.bin/next"), ["start", "-p", String(PORT), "-H", "127.0.0.1"], {

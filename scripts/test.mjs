@@ -72,6 +72,8 @@ async function main() {
   const env = { ...process.env, DATABASE_URL: databaseUrl, NEXT_TELEMETRY_DISABLED: "1" };
 
   if (!check("migrations", bin("tsx"), ["scripts/migrate.ts"], env)) return finish();
+  // The worker threads' bundle (lib/workers), used by integration tests and the built app.
+  check("worker bundle", process.execPath, ["scripts/build-workers.mjs"], env);
   check("lint", bin("eslint"), [".", "--max-warnings", "0"], env);
   check("type-check", bin("tsc"), ["--noEmit", "-p", "tsconfig.json"], env);
   vitest("unit and reference tests", "vitest.config.ts", env);

@@ -9,6 +9,7 @@ import { can, HOME_BY_ROLE, type Action } from "@/lib/permissions";
 
 const NAV: ReadonlyArray<NavItem & { action: Action }> = [
   { href: "/projects", label: "Projects", action: "projects:read" },
+  { href: "/catalogue", label: "Catalogue", action: "projects:read" },
   { href: "/members", label: "Members", action: "members:read" },
   { href: "/my-seats", label: "My seats", action: "own-seats:read" },
 ];

@@ -23,12 +23,22 @@
  * 4. Operative temperature, PMV/PPD (ISO 7730), asymmetry dissatisfied (ISO 7730 clause 6.5),
  *    category and ASHRAE 55 (`classifySeat`).
  * 5. Panels: output from lib/panels against the room's AUST; condensation margin for chilled
- *    panels; a hot-surface caution for reachable heating panels.
+ *    panels; a hot-surface caution for reachable heating panels. A louvered panel's output at
+ *    its setting uses the face's apparent hemispherical emissivity (`louverFaceEmissivityAt`:
+ *    cavity table × aperture share).
+ * 5a. Louvered panels toward an occupant: the panel's apparent emissivity in the direction of
+ *    the seat's body centre (or heatmap point) — `louverEmissivityToward`'s parts: exit angle
+ *    across the grooves from the panel centre, directional emissivity per unit face area at the
+ *    opening angle — and the effective radiant temperature `louverEffectiveTemperatureC`
+ *    against the room's AUST. So the same panel looks warmer (heating) from a seat in line
+ *    with its openings than from one at a grazing angle. The direction is taken from the panel
+ *    centre (one direction per seat and panel).
  * 6. Heatmap: small-sphere MRT (solid angles) at seated head height and PMV with the scenario's
  *    defaults.
  *
  * Known simplifications (also in the report's method notes): surfaces are black for the
- * occupant except panels, which are grey (see `panelRadiantTemperature`); no obstruction
+ * occupant except panels, which are grey (see `panelRadiantTemperature`; louvered panels
+ * directionally grey, 5a); no obstruction
  * between surfaces and occupants (furniture, the other wing of an L-shaped room); uniform air
  * temperature and speed per scenario; a ceiling panel hung below the ceiling is modelled in
  * its own plane but still covers the ceiling area above it.
@@ -55,12 +65,22 @@ import type {
 import { buildLayoutGeometry, pointInPolygon, netAreas, validateForCompute, type RoomGeometry, type RoomSurface } from "@/lib/compute/geometry";
 import type { Layout, Panel, Seat, Zone } from "@/lib/layout/schema";
 import {
+  buildLouverTable,
   characteristicOutput,
   condensationMargin,
+  louverDirectionalEmissivity,
+  louverEffectiveTemperatureC,
+  louverExitAngleDeg,
+  louverFaceEmissivityAt,
   louveredPanelOutput,
+  louverTableKey,
   panelOutput,
   STANDARD_SURFACE_EXCHANGE,
+  type LouverEmissivity,
+  type LouverTable,
+  type LouverTableParams,
   type PanelOutput,
+  type PanelOutputInput,
 } from "@/lib/panels";
 import type { ScenarioConditions, SurfaceThermal } from "@/lib/scenarios/schema";
 import { insideSurfaceTemperature, type ElementPosition } from "@/lib/scenarios/surface-temperature";
@@ -74,7 +94,6 @@ import {
   weightedMeanRadiantTemperature,
   type Vec3,
 } from "@/lib/viewfactor";
-import { grooveEmissivityDiffuseRadiosity, grooveEmissivitySpecularUnfolded } from "@/lib/viewfactor/groove";
 
 /** Height of the body centre, m: ISO 7726 Annex C uses 0.6 m seated and 1.0 m standing. */
 export const BODY_CENTRE_HEIGHT_M = { seated: 0.6, standing: 1.0 } as const;
@@ -96,12 +115,15 @@ export const MAX_HEATMAP_CELLS = 20_000;
  */
 export const REACHABLE_HEIGHT_M = 2;
 export const HOT_SURFACE_LIMIT_C = 43;
-/** Strips per wall for the diffuse louver-cavity radiosity solution (plenty for 3 decimals). */
-const LOUVER_RADIOSITY_STRIPS = 64;
-
 export interface ComputeOptions {
   /** Heatmap grid step, m (default 0.25). */
   stepM?: number;
+  /**
+   * Louver cavity tables by `louverTableKey` (see {@link louverTableParams}); the service passes
+   * them from its cache. A table missing here is built on the calling thread
+   * (`buildLouverTable`, 0.3–1 s) and added to this map when one is given.
+   */
+  louverTables?: Map<string, LouverTable>;
 }
 
 /** What the computation produces; the service adds the request's ids, timing and cache flag. */
@@ -117,7 +139,7 @@ function thermalTemperature(thermal: SurfaceThermal | null, position: ElementPos
 }
 
 /** Temperature of a room surface that is not a panel, °C. */
-function passiveSurfaceTemperature(surface: RoomSurface, geometry: RoomGeometry, c: ScenarioConditions): number {
+export function passiveSurfaceTemperature(surface: RoomSurface, geometry: RoomGeometry, c: ScenarioConditions): number {
   const airC = c.airTemperatureC;
   const outC = c.outdoorTemperatureC;
   switch (surface.role) {
@@ -139,24 +161,80 @@ function passiveSurfaceTemperature(surface: RoomSurface, geometry: RoomGeometry,
   }
 }
 
+/** Parameters of the cavity table a louver needs: its finish and wall emissivity, default grid. */
+export function louverTableParams(louver: Readonly<NonNullable<Panel["louver"]>>): LouverTableParams {
+  return { finish: louver.finish, wallEmissivity: louver.wallEmissivity };
+}
+
 /**
- * Apparent emissivity of a louvered panel's V-groove cavities at their opening angle
- * (lib/viewfactor/groove: diffuse walls by radiosity, specular by unfolding), memoised per
- * computation. A closed louver (0°) is taken at 1°, the smallest angle modelled.
+ * The cavity table of a louvered panel from `tables`, built (and added to `tables`) when it is
+ * missing.
  */
-function louverApparentEmissivity(panel: Panel, memo: Map<string, number>): number | null {
-  const l = panel.louver;
-  if (!l) return null;
-  const angle = Math.max(1, l.openingAngleDeg);
-  const key = `${l.finish}:${angle}:${l.wallEmissivity}`;
-  const known = memo.get(key);
-  if (known !== undefined) return known;
-  const value =
-    l.finish === "diffuse"
-      ? grooveEmissivityDiffuseRadiosity({ openingAngleDeg: angle, wallEmissivity: l.wallEmissivity, strips: LOUVER_RADIOSITY_STRIPS }).hemispherical
-      : grooveEmissivitySpecularUnfolded({ openingAngleDeg: angle, wallEmissivity: l.wallEmissivity }).hemispherical;
-  memo.set(key, value);
-  return value;
+export function louverTableFor(louver: Readonly<NonNullable<Panel["louver"]>>, tables: Map<string, LouverTable>): LouverTable {
+  const params = louverTableParams(louver);
+  const key = louverTableKey(params);
+  let table = tables.get(key);
+  if (!table) {
+    table = buildLouverTable(params);
+    tables.set(key, table);
+  }
+  return table;
+}
+
+/** Where a louvered panel sits and how its grooves run, m and unit vectors. */
+export interface LouverFrame {
+  /** Centre of the panel face, m. */
+  centre: Vec3;
+  /** Unit face normal, into the room. */
+  normal: Vec3;
+  /** Unit groove axis, in the panel plane. */
+  axis: Vec3;
+}
+
+/**
+ * The frame of a louvered panel surface. Ceiling panel: face normal straight down, groove
+ * axis the plan direction `louver.axisDeg`. Wall panel: face normal the wall's inward normal;
+ * the plan direction is turned into the wall plane by its angle φ to the wall line —
+ * axis = cos φ·(along the wall) + sin φ·(up): along the wall = horizontal grooves, across the
+ * wall = vertical grooves (a convention of ours, stated in docs/api.md).
+ */
+export function louverFrame(surface: Readonly<RoomSurface>): LouverFrame {
+  const panel = surface.panel;
+  if (!panel?.louver) throw new RangeError(`surface ${surface.id} is not a louvered panel`);
+  const corners = surface.pieces[0]!;
+  const centre: Vec3 = [0, 0, 0];
+  for (const c of corners) {
+    centre[0] += c[0] / corners.length;
+    centre[1] += c[1] / corners.length;
+    centre[2] += c[2] / corners.length;
+  }
+  const a = (panel.louver.axisDeg * Math.PI) / 180;
+  if (panel.mounting === "ceiling") return { centre, normal: [0, 0, -1], axis: [Math.cos(a), Math.sin(a), 0] };
+  // Wall rectangle: corners 0 → 1 run along the counter-clockwise outline, so the room is on the left.
+  const [p, q] = corners as [Vec3, Vec3];
+  const len = Math.hypot(q[0] - p[0], q[1] - p[1]);
+  const ux = (q[0] - p[0]) / len;
+  const uy = (q[1] - p[1]) / len;
+  const phi = a - Math.atan2(uy, ux);
+  const c = Math.cos(phi);
+  const sn = Math.abs(Math.sin(phi));
+  return { centre, normal: [-uy, ux, 0], axis: [c * ux, c * uy, sn] };
+}
+
+/**
+ * Effective radiant temperature of an active louvered panel seen from `point`, °C:
+ * `louverEffectiveTemperatureC` with the directional emissivity per unit face area toward the
+ * point (exit angle across the grooves from the panel centre, `louverExitAngleDeg`;
+ * `louverDirectionalEmissivity` of the setting's face values). A point behind the face sees
+ * the surroundings (ε = 0; its view factor is 0 anyway).
+ */
+export function louverTemperatureToward(louver: Readonly<PreparedLouver>, point: Readonly<Vec3>): number {
+  const f = louver.frame;
+  const d: Vec3 = [point[0] - f.centre[0], point[1] - f.centre[1], point[2] - f.centre[2]];
+  if (d[0] === 0 && d[1] === 0 && d[2] === 0) return louver.austC;
+  const theta = louverExitAngleDeg(f.normal, f.axis, d);
+  const e = Number.isNaN(theta) ? 0 : Math.min(1, Math.max(0, louverDirectionalEmissivity(louver.face, theta)));
+  return louverEffectiveTemperatureC({ surfaceC: louver.surfaceC, surroundingsC: louver.austC, directionalEmissivity: e });
 }
 
 /**
@@ -193,8 +271,8 @@ export function panelRadiantTemperature(surfaceC: number, austC: number, emissiv
   return Math.sqrt(Math.sqrt(emissivity * ts ** 4 + (1 - emissivity) * tu ** 4)) - CELSIUS_TO_KELVIN_OFFSET_K;
 }
 
-/** A room prepared once for all its seats and heatmap cells. */
-interface PreparedRoom {
+/** A room prepared once for all its seats and heatmap cells (also the optimiser's starting point). */
+export interface PreparedRoom {
   geometry: RoomGeometry;
   surfaces: RoomSurface[];
   /** Temperature each surface radiates at (as the occupant sees it), °C. */
@@ -207,6 +285,23 @@ interface PreparedRoom {
   polygonHost: Int32Array;
   austC: number;
   panels: PanelResult[];
+  /** The active louvered panels, whose temperature depends on where they are seen from. */
+  louvers: PreparedLouver[];
+}
+
+/** An active louvered panel of a prepared room. */
+export interface PreparedLouver {
+  /** Index of the panel in the room's surfaces. */
+  surfaceIndex: number;
+  panel: Panel;
+  /** The panel-output input at its surface temperature (the louver changes only the emissivity). */
+  outputInput: PanelOutputInput;
+  table: LouverTable;
+  frame: LouverFrame;
+  /** Face emissivities at the panel's opening angle (per unit face area). */
+  face: LouverEmissivity;
+  surfaceC: number;
+  austC: number;
 }
 
 function round(x: number, digits: number): number {
@@ -214,7 +309,7 @@ function round(x: number, digits: number): number {
   return Math.round(x * f) / f;
 }
 
-function prepareRoom(geometry: RoomGeometry, c: ScenarioConditions, louverMemo: Map<string, number>, warnings: ComputeWarning[]): PreparedRoom {
+function prepareRoom(geometry: RoomGeometry, c: ScenarioConditions, louverTables: Map<string, LouverTable>, warnings: ComputeWarning[]): PreparedRoom {
   const surfaces = geometry.surfaces;
   const airC = c.airTemperatureC;
   const temperaturesC = new Float64Array(surfaces.length);
@@ -238,10 +333,10 @@ function prepareRoom(geometry: RoomGeometry, c: ScenarioConditions, louverMemo: 
   const austC = aSum > 0 ? taSum / aSum : airC;
 
   const panels: PanelResult[] = [];
+  const louvers: PreparedLouver[] = [];
   surfaces.forEach((s, i) => {
     const p = s.panel;
     if (!p) return;
-    const apparent = louverApparentEmissivity(p, louverMemo);
     if (!active[i]) {
       panels.push({
         id: p.id, label: p.label, roomId: geometry.room.id, mode: p.mode, active: false,
@@ -252,15 +347,20 @@ function prepareRoom(geometry: RoomGeometry, c: ScenarioConditions, louverMemo: 
     }
     const { surfaceC, characteristicWm2 } = panelSurfaceTemperature(p, airC);
     const orientation = p.mounting;
-    const base = {
+    const base: PanelOutputInput = {
       orientation, mode: p.mode, surfaceC, airC, austC, emissivity: p.emissivity, areaM2: s.areaM2,
       ...(orientation === "ceiling" ? { equivalentDiameterM: (4 * s.areaM2) / (2 * (p.widthM + p.lengthM)) } : { heightM: p.widthM }),
     };
-    const out: PanelOutput = apparent === null ? panelOutput(base) : louveredPanelOutput({ ...base, apparentEmissivity: apparent });
+    const table = p.louver ? louverTableFor(p.louver, louverTables) : null;
+    const face = p.louver && table ? louverFaceEmissivityAt(table, p.louver.openingAngleDeg) : null;
+    const out: PanelOutput = face === null ? panelOutput(base) : louveredPanelOutput({ ...base, apparentEmissivity: Math.min(1, face.hemispherical) });
     const share = Number.isFinite(out.radiantShare) ? out.radiantShare : 0;
-    // A water-supplied panel delivers what its tested characteristic says; the split follows the surface model.
-    const totalWm2 = characteristicWm2 ?? out.totalWm2;
-    const radiantWm2 = characteristicWm2 === null ? out.radiantWm2 : characteristicWm2 * share;
+    // A water-supplied flat panel delivers what its tested characteristic says; the split follows
+    // the surface model. A louvered one: the characteristic sets its surface temperature, the
+    // louver setting its output (the surface model at that temperature).
+    const useCharacteristic = characteristicWm2 !== null && face === null;
+    const totalWm2 = useCharacteristic ? characteristicWm2 : out.totalWm2;
+    const radiantWm2 = useCharacteristic ? characteristicWm2 * share : out.radiantWm2;
     const panelWarnings: string[] = [];
     let condensation: PanelResult["condensation"] = null;
     if (p.mode === "cooling") {
@@ -280,7 +380,9 @@ function prepareRoom(geometry: RoomGeometry, c: ScenarioConditions, louverMemo: 
       );
     }
     for (const message of panelWarnings) warnings.push({ code: message.startsWith("Condensation") ? "condensation_risk" : "hot_surface", message, objectId: p.id });
-    temperaturesC[i] = panelRadiantTemperature(surfaceC, austC, apparent ?? p.emissivity);
+    // Seen from an unspecified direction (the surface list's figure): hemispherical face emissivity.
+    temperaturesC[i] = panelRadiantTemperature(surfaceC, austC, face === null ? p.emissivity : Math.min(1, face.hemispherical));
+    if (face !== null && table !== null) louvers.push({ surfaceIndex: i, panel: p, outputInput: base, table, frame: louverFrame(s), face, surfaceC, austC });
     panels.push({
       id: p.id, label: p.label, roomId: geometry.room.id, mode: p.mode, active: true,
       surfaceTemperatureC: round(surfaceC, 3), areaM2: round(s.areaM2, 4),
@@ -305,7 +407,22 @@ function prepareRoom(geometry: RoomGeometry, c: ScenarioConditions, louverMemo: 
     const k = t + CELSIUS_TO_KELVIN_OFFSET_K;
     t4[i] = k * k * k * k;
   });
-  return { geometry, surfaces, temperaturesC, t4, polygons, polygonSurface: Int32Array.from(owner), polygonHost: Int32Array.from(host), austC, panels };
+  return { geometry, surfaces, temperaturesC, t4, polygons, polygonSurface: Int32Array.from(owner), polygonHost: Int32Array.from(host), austC, panels, louvers };
+}
+
+/**
+ * Surface temperatures as seen from `point`: the room's, with each active louvered panel at
+ * its effective temperature toward the point. Writes °C to `outC` and (T + 273.15)⁴ to `outT4`.
+ */
+function temperaturesToward(room: PreparedRoom, point: Readonly<Vec3>, outC: Float64Array, outT4: Float64Array): void {
+  outC.set(room.temperaturesC);
+  outT4.set(room.t4);
+  for (const l of room.louvers) {
+    const t = louverTemperatureToward(l, point);
+    const k = t + CELSIUS_TO_KELVIN_OFFSET_K;
+    outC[l.surfaceIndex] = t;
+    outT4[l.surfaceIndex] = k * k * k * k;
+  }
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -325,22 +442,29 @@ function planeFactors(room: PreparedRoom, position: Readonly<Vec3>, normal: Read
   return out;
 }
 
-function planeRadiantC(room: PreparedRoom, factors: Float64Array): number {
-  return fourthPowerMean(factors, room.temperaturesC).temperatureC;
+function planeRadiantC(temperaturesC: Float64Array, factors: Float64Array): number {
+  return fourthPowerMean(factors, temperaturesC).temperatureC;
 }
 
 function toFailure(f: { code: string; message: string } | undefined): ComfortLimitFailure | null {
   return f ? { code: f.code, message: f.message } : null;
 }
 
-function computeSeat(seat: Seat, room: PreparedRoom, zones: ReadonlyArray<Zone>, c: ScenarioConditions): SeatResult {
+/** The six plane directions of ISO 7726 Annex C, in a fixed order. */
+export const PLANE_DIRECTIONS = ["up", "down", "front", "back", "left", "right"] as const;
+export type PlaneDirection = (typeof PLANE_DIRECTIONS)[number];
+
+/**
+ * A seat's body centre (ISO 7726 Annex C heights) and the per-surface view factors of its six
+ * small plane elements (up, down, and front/back/left/right turned to the seat's facing).
+ */
+export function seatPlaneFactors(seat: Readonly<Seat>, room: PreparedRoom): { position: Vec3; factors: Record<PlaneDirection, Float64Array> } {
   const n = room.surfaces.length;
-  const z = BODY_CENTRE_HEIGHT_M[seat.posture];
-  const position: Vec3 = [seat.position.x, seat.position.y, z];
+  const position: Vec3 = [seat.position.x, seat.position.y, BODY_CENTRE_HEIGHT_M[seat.posture]];
   const facing = (seat.facingDeg * Math.PI) / 180;
   const cf = Math.cos(facing);
   const sf = Math.sin(facing);
-  const normals: Record<"up" | "down" | "front" | "back" | "left" | "right", Vec3> = {
+  const normals: Record<PlaneDirection, Vec3> = {
     up: [0, 0, 1],
     down: [0, 0, -1],
     front: [cf, sf, 0],
@@ -348,12 +472,19 @@ function computeSeat(seat: Seat, room: PreparedRoom, zones: ReadonlyArray<Zone>,
     left: [-sf, cf, 0],
     right: [sf, -cf, 0],
   };
-  const factors = {} as Record<keyof typeof normals, Float64Array>;
-  const tpr = {} as Record<keyof typeof normals, number>;
-  for (const dir of Object.keys(normals) as (keyof typeof normals)[]) {
-    factors[dir] = planeFactors(room, position, normals[dir], new Float64Array(n));
-    tpr[dir] = planeRadiantC(room, factors[dir]);
-  }
+  const factors = {} as Record<PlaneDirection, Float64Array>;
+  for (const dir of PLANE_DIRECTIONS) factors[dir] = planeFactors(room, position, normals[dir], new Float64Array(n));
+  return { position, factors };
+}
+
+function computeSeat(seat: Seat, room: PreparedRoom, zones: ReadonlyArray<Zone>, c: ScenarioConditions): SeatResult {
+  const n = room.surfaces.length;
+  const { position, factors } = seatPlaneFactors(seat, room);
+  const temperaturesC = new Float64Array(n);
+  const t4 = new Float64Array(n);
+  temperaturesToward(room, position, temperaturesC, t4);
+  const tpr = {} as Record<PlaneDirection, number>;
+  for (const dir of PLANE_DIRECTIONS) tpr[dir] = planeRadiantC(temperaturesC, factors[dir]);
   const mrtC = weightedMeanRadiantTemperature(
     { upC: tpr.up, downC: tpr.down, frontC: tpr.front, backC: tpr.back, leftC: tpr.left, rightC: tpr.right },
     seat.posture,
@@ -370,15 +501,15 @@ function computeSeat(seat: Seat, room: PreparedRoom, zones: ReadonlyArray<Zone>,
         w.leftRight * (factors.left[i]! + factors.right[i]!) +
         w.frontBack * (factors.front[i]! + factors.back[i]!)) /
       wTotal;
-    radiantSum += angle[i]! * room.t4[i]!;
+    radiantSum += angle[i]! * t4[i]!;
   }
   const surfaces: SeatSurfaceShare[] = room.surfaces.map((s, i) => ({
     surfaceId: s.id,
     kind: s.kind,
     label: s.label,
-    temperatureC: round(room.temperaturesC[i]!, 3),
+    temperatureC: round(temperaturesC[i]!, 3),
     angleFactor: round(angle[i]!, 5),
-    mrtShare: round(radiantSum > 0 ? (angle[i]! * room.t4[i]!) / radiantSum : 0, 5),
+    mrtShare: round(radiantSum > 0 ? (angle[i]! * t4[i]!) / radiantSum : 0, 5),
   }));
 
   // Horizontal asymmetry: opposite vertical planes every 5°, as lib/viewfactor's radiantField.
@@ -392,10 +523,10 @@ function computeSeat(seat: Seat, room: PreparedRoom, zones: ReadonlyArray<Zone>,
     const theta = k * HORIZONTAL_ASYMMETRY_STEP_RAD;
     normal[0] = Math.cos(theta);
     normal[1] = Math.sin(theta);
-    const forward = planeRadiantC(room, planeFactors(room, position, normal, scratch));
+    const forward = planeRadiantC(temperaturesC, planeFactors(room, position, normal, scratch));
     normal[0] = -normal[0];
     normal[1] = -normal[1];
-    const backward = planeRadiantC(room, planeFactors(room, position, normal, scratch));
+    const backward = planeRadiantC(temperaturesC, planeFactors(room, position, normal, scratch));
     if (Math.abs(forward - backward) > horizontal) {
       horizontal = Math.abs(forward - backward);
       warmSide = Math.max(forward, backward);
@@ -509,6 +640,8 @@ function computeGrid(room: PreparedRoom, stepM: number, c: ScenarioConditions): 
   const pmv: (number | null)[] = new Array(cols * rows).fill(null);
   const mrt: (number | null)[] = new Array(cols * rows).fill(null);
   const factors = new Float64Array(room.surfaces.length);
+  const cellC = new Float64Array(room.surfaces.length);
+  const cellT4 = new Float64Array(room.surfaces.length);
   const point: Vec3 = [0, 0, HEATMAP_HEIGHT_M];
   const plan = { x: 0, y: 0 };
   const input = { ta: c.airTemperatureC, tr: 0, vr: c.airSpeedMps, rh: c.relativeHumidityPercent, met: c.defaultMet, clo: c.defaultClo };
@@ -529,12 +662,14 @@ function computeGrid(room: PreparedRoom, stepM: number, c: ScenarioConditions): 
         const h = room.polygonHost[k]!;
         if (h >= 0) factors[h] = factors[h]! - f;
       }
+      const t4 = room.louvers.length > 0 ? cellT4 : room.t4;
+      if (room.louvers.length > 0) temperaturesToward(room, point, cellC, cellT4);
       let fSum = 0;
       let t4Sum = 0;
       for (let i = 0; i < factors.length; i++) {
         const f = factors[i]! > 0 ? factors[i]! : 0;
         fSum += f;
-        t4Sum += f * room.t4[i]!;
+        t4Sum += f * t4[i]!;
       }
       const mrtC = Math.sqrt(Math.sqrt(t4Sum / fSum)) - CELSIUS_TO_KELVIN_OFFSET_K;
       input.tr = mrtC;
@@ -547,6 +682,34 @@ function computeGrid(room: PreparedRoom, stepM: number, c: ScenarioConditions): 
 }
 
 // ---------------------------------------------------------------------------------------------
+
+function prepareRooms(
+  layout: Layout,
+  geometry: Map<string, RoomGeometry>,
+  conditions: ScenarioConditions,
+  louverTables: Map<string, LouverTable>,
+  warnings: ComputeWarning[],
+): Map<string, PreparedRoom> {
+  const prepared = new Map<string, PreparedRoom>();
+  for (const room of layout.rooms) prepared.set(room.id, prepareRoom(geometry.get(room.id)!, conditions, louverTables, warnings));
+  return prepared;
+}
+
+/**
+ * Steps 1, 2 and 5 of the computation for every room — surfaces, their temperatures, AUST,
+ * panel results and the active louvered panels — without seats or heatmap (the louver
+ * optimiser starts from here).
+ * @throws AppError('invalid_input') naming each object when the layout cannot be computed.
+ */
+export function prepareComfortRooms(layout: Layout, conditions: ScenarioConditions, louverTables: Map<string, LouverTable> = new Map()): Map<string, PreparedRoom> {
+  validateForCompute(layout);
+  return prepareRooms(layout, buildLayoutGeometry(layout), conditions, louverTables, []);
+}
+
+/** The room (in layout order) that holds a seat, as the computation assigns it. */
+export function roomOfSeat(layout: Readonly<Layout>, seat: Readonly<Seat>): string | null {
+  return layout.rooms.find((r) => pointInPolygon(seat.position, r.outline))?.id ?? null;
+}
 
 /**
  * Computes comfort for a layout under a scenario's conditions.
@@ -569,13 +732,10 @@ export function computeComfort(layout: Layout, conditions: ScenarioConditions, o
       objectId: null,
     });
   }
-  const louverMemo = new Map<string, number>();
-  const prepared = new Map<string, PreparedRoom>();
-  for (const room of layout.rooms) prepared.set(room.id, prepareRoom(geometry.get(room.id)!, conditions, louverMemo, warnings));
+  const prepared = prepareRooms(layout, geometry, conditions, options.louverTables ?? new Map<string, LouverTable>(), warnings);
 
   const seats = layout.seats.map((seat) => {
-    const room = layout.rooms.find((r) => pointInPolygon(seat.position, r.outline))!;
-    const result = computeSeat(seat, prepared.get(room.id)!, layout.zones, conditions);
+    const result = computeSeat(seat, prepared.get(roomOfSeat(layout, seat)!)!, layout.zones, conditions);
     if (!result.withinRange) {
       warnings.push({
         code: "pmv_out_of_range",

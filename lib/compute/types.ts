@@ -114,6 +114,8 @@ export interface ComputeResult {
   revision: number;
   scenarioId: string;
   computedAt: string;
+  /** Version of the computation's method (lib/compute/service.ts COMPUTE_MODEL_VERSION). */
+  modelVersion: number;
   /** Server time spent computing, ms (0 when served from the cache). */
   computeMs: number;
   cached: boolean;

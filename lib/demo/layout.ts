@@ -2,9 +2,12 @@
  * The demo plan: an invented office floor ("Quayside House, level 3") with an open office along
  * a glazed south façade, a meeting room and a focus room. Invented data, for the demo only.
  */
+import type { Weekday } from "@/lib/energy";
 import { LAYOUT_SCHEMA_VERSION, type Layout, type Panel, type Seat } from "@/lib/layout/schema";
 
 const CEILING_M = 2.8;
+/** Occupancy schedules run Monday to Friday. */
+const WORKDAYS: Weekday[] = ["mon", "tue", "wed", "thu", "fri"];
 
 function ceilingPanel(id: string, label: string, roomId: string, x: number, y: number, louvered: boolean, mode: Panel["mode"] = "heating"): Panel {
   return {
@@ -90,9 +93,16 @@ export function demoLayout(): Layout {
     panels,
     seats,
     zones: [
-      { id: "zone-window", name: "Window desks", outline: [{ x: 0, y: 0 }, { x: 18, y: 0 }, { x: 18, y: 4 }, { x: 0, y: 4 }], target: { kind: "category", category: "B" } },
-      { id: "zone-core", name: "Core desks", outline: [{ x: 0, y: 4 }, { x: 18, y: 4 }, { x: 18, y: 12 }, { x: 0, y: 12 }], target: { kind: "pmvBand", minPmv: -0.5, maxPmv: 0.5 } },
-      { id: "zone-meeting", name: "Meeting", outline: [{ x: 18, y: 0 }, { x: 24, y: 0 }, { x: 24, y: 6 }, { x: 18, y: 6 }], target: { kind: "category", category: "B" } },
+      { id: "zone-window", name: "Window desks", outline: [{ x: 0, y: 0 }, { x: 18, y: 0 }, { x: 18, y: 4 }, { x: 0, y: 4 }], target: { kind: "category", category: "B" }, schedule: { periods: [{ days: WORKDAYS, startHour: 8, endHour: 18, louver: { mode: "automatic" } }] } },
+      { id: "zone-core", name: "Core desks", outline: [{ x: 0, y: 4 }, { x: 18, y: 4 }, { x: 18, y: 12 }, { x: 0, y: 12 }], target: { kind: "pmvBand", minPmv: -0.5, maxPmv: 0.5 },
+        schedule: {
+          periods: [
+            { days: WORKDAYS, startHour: 8, endHour: 12, louver: { mode: "fixed", openingAngleDeg: 120 } },
+            { days: WORKDAYS, startHour: 13, endHour: 18, louver: { mode: "automatic" } },
+          ],
+        },
+      },
+      { id: "zone-meeting", name: "Meeting", outline: [{ x: 18, y: 0 }, { x: 24, y: 0 }, { x: 24, y: 6 }, { x: 18, y: 6 }], target: { kind: "category", category: "B" }, schedule: { periods: [{ days: WORKDAYS, startHour: 9, endHour: 17, louver: { mode: "fixed", openingAngleDeg: 90 } }] } },
     ],
     underlay: null,
   };

@@ -6,16 +6,17 @@ import { z } from "zod";
 import { scheduleIssues } from "./schedule";
 import { WEEKDAYS, type SchedulePeriod, type Weekday } from "./types";
 
+// Strict objects throughout: an unknown key is a 400 naming it, never silently dropped.
 const weekdaySchema = z.enum(WEEKDAYS as [Weekday, ...Weekday[]]);
 
 /** Louver setting of a period. */
 export const louverSettingSchema = z.discriminatedUnion("mode", [
-  z.object({ mode: z.literal("fixed"), openingAngleDeg: z.number().finite().gt(0).lte(180) }),
-  z.object({ mode: z.literal("automatic") }),
+  z.strictObject({ mode: z.literal("fixed"), openingAngleDeg: z.number().finite().gt(0).lte(180) }),
+  z.strictObject({ mode: z.literal("automatic") }),
 ]);
 
 /** One occupancy period (per-period checks only; overlaps are checked on the schedule). */
-export const schedulePeriodSchema = z.object({
+export const schedulePeriodSchema = z.strictObject({
   days: z.array(weekdaySchema).min(1),
   startHour: z.number().finite().min(0).max(24),
   endHour: z.number().finite().min(0).max(24),
@@ -24,7 +25,7 @@ export const schedulePeriodSchema = z.object({
 
 /** A zone schedule: its periods, validated together (no overlaps on a common day). */
 export const zoneScheduleSchema = z
-  .object({ periods: z.array(schedulePeriodSchema) })
+  .strictObject({ periods: z.array(schedulePeriodSchema).max(50) })
   .superRefine((value, ctx) => {
     for (const issue of scheduleIssues(value.periods)) {
       ctx.addIssue({ code: "custom", path: ["periods", issue.periodIndex], message: issue.message });

@@ -5,6 +5,7 @@
  * feedback) lives in its own tables so it can change without a new revision.
  */
 import { z } from "zod";
+import { zoneScheduleSchema } from "@/lib/energy/schedule-schema";
 
 export const LAYOUT_SCHEMA_VERSION = 1 as const;
 
@@ -137,6 +138,12 @@ export const zone = z.strictObject({
   name: label,
   outline: z.array(planPoint).min(3).max(64),
   target: zoneTarget,
+  /**
+   * Weekday occupancy periods, each with a louver setting (a fixed opening angle or "automatic"),
+   * for the energy figures (GET /api/projects/{id}/energy). Optional: absent = no schedule
+   * (layouts saved before schedules existed stay valid at schemaVersion 1).
+   */
+  schedule: zoneScheduleSchema.optional(),
 });
 
 export const underlay = z.strictObject({

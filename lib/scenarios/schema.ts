@@ -44,6 +44,28 @@ export const scenarioConditions = z.strictObject({
     /** Openings without their own thermal data. */
     openings: surfaceThermal,
   }),
+  // Room loads and the water side (GET /loads, /energy). Optional so scenarios saved before they
+  // existed still parse; `withLoadDefaults` fills in LOAD_DEFAULTS where they are read.
+  /** Outdoor air changes per hour for the ventilation part of the room loads, 1/h (default 0.5). */
+  airChangesPerHour: finite.min(0).max(20).optional(),
+  /** Sensible internal gains counted in the summer (cooling) load; default LOAD_DEFAULTS.internalGains. */
+  internalGains: z
+    .strictObject({
+      /** Occupants: one per seat drawn in the room, or a density per m² of floor. */
+      occupants: z.discriminatedUnion("kind", [
+        z.strictObject({ kind: z.literal("seats") }),
+        z.strictObject({ kind: z.literal("density"), personsPerM2: finite.min(0).max(2) }),
+      ]),
+      /** Sensible gain per person, W (70 W: seated, very light office work, ASHRAE Fundamentals ch. 18 Table 1). */
+      sensibleWPerPerson: finite.min(0).max(300),
+      /** Equipment, W/m² of floor. */
+      equipmentWm2: finite.min(0).max(200),
+      /** Lighting, W/m² of floor. */
+      lightingWm2: finite.min(0).max(100),
+    })
+    .optional(),
+  /** Design temperature drop |flow − return| of water-supplied panels, K (defaults 5 heating, 3 cooling). */
+  waterTemperatureDropK: z.strictObject({ heating: finite.min(0.5).max(40), cooling: finite.min(0.5).max(20) }).optional(),
 });
 
 export const scenarioName = z.string().trim().min(1, "enter a name").max(80);
@@ -57,6 +79,33 @@ export const scenarioParams = z.strictObject({
 
 export type ScenarioConditions = z.infer<typeof scenarioConditions>;
 export type ScenarioInput = z.infer<typeof scenarioInput>;
+export type InternalGainsConditions = NonNullable<ScenarioConditions["internalGains"]>;
+
+/**
+ * What an absent load field means (scenarios saved before the fields existed have none):
+ * 0.5 air changes per hour (a common minimum for occupied rooms, EN 12831 practice), one person
+ * per seat at 70 W sensible with no equipment or lighting gains, and water temperature drops of
+ * 5 K heating / 3 K cooling (usual design drops for radiant panels).
+ */
+export const LOAD_DEFAULTS: Readonly<LoadFields> = {
+  airChangesPerHour: 0.5,
+  internalGains: { occupants: { kind: "seats" }, sensibleWPerPerson: 70, equipmentWm2: 0, lightingWm2: 0 },
+  waterTemperatureDropK: { heating: 5, cooling: 3 },
+};
+
+type LoadFields = Required<Pick<ScenarioConditions, "airChangesPerHour" | "internalGains" | "waterTemperatureDropK">>;
+
+/** Conditions with every optional load field filled in from LOAD_DEFAULTS. */
+export type ResolvedScenarioConditions = ScenarioConditions & LoadFields;
+
+export function withLoadDefaults(conditions: ScenarioConditions): ResolvedScenarioConditions {
+  return {
+    ...conditions,
+    airChangesPerHour: conditions.airChangesPerHour ?? LOAD_DEFAULTS.airChangesPerHour,
+    internalGains: conditions.internalGains ?? LOAD_DEFAULTS.internalGains,
+    waterTemperatureDropK: conditions.waterTemperatureDropK ?? LOAD_DEFAULTS.waterTemperatureDropK,
+  };
+}
 
 /** The two design scenarios every new demo project gets (invented values typical of an office). */
 export const WINTER_DESIGN: ScenarioInput = {
@@ -76,6 +125,8 @@ export const WINTER_DESIGN: ScenarioInput = {
       ceiling: null,
       openings: { kind: "uValue", uValueWm2K: 1.4 },
     },
+    airChangesPerHour: 0.5,
+    waterTemperatureDropK: { heating: 5, cooling: 3 },
   },
 };
 
@@ -96,5 +147,9 @@ export const SUMMER_DESIGN: ScenarioInput = {
       ceiling: null,
       openings: { kind: "uValue", uValueWm2K: 1.4 },
     },
+    airChangesPerHour: 0.7,
+    // Open-plan office: one person per desk, about 10 W/m² of IT equipment and 8 W/m² of LED lighting (invented, typical values).
+    internalGains: { occupants: { kind: "seats" }, sensibleWPerPerson: 70, equipmentWm2: 10, lightingWm2: 8 },
+    waterTemperatureDropK: { heating: 5, cooling: 3 },
   },
 };

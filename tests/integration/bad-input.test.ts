@@ -8,11 +8,17 @@ import { POST as confirmReset } from "@/app/api/auth/password-reset/confirm/rout
 import { POST as requestReset } from "@/app/api/auth/password-reset/request/route";
 import { POST as signIn } from "@/app/api/auth/sign-in/route";
 import { POST as signUp } from "@/app/api/auth/sign-up/route";
+import { POST as importCatalogue } from "@/app/api/catalogue/import/route";
 import { POST as acceptInvitation } from "@/app/api/invitations/accept/route";
+import { POST as requestCavityTable } from "@/app/api/louvers/cavity-table/route";
 import { PATCH as patchSettings } from "@/app/api/me/settings/route";
 import { PATCH as changeRole } from "@/app/api/members/[membershipId]/route";
 import { POST as createInvitation } from "@/app/api/members/invitations/route";
 import { POST as runCompute } from "@/app/api/projects/[projectId]/compute/route";
+import { POST as sweepLouver } from "@/app/api/projects/[projectId]/louvers/sweep/route";
+import { POST as applyLouvers } from "@/app/api/projects/[projectId]/louvers/apply/route";
+import { POST as optimiseLouversJob } from "@/app/api/projects/[projectId]/louvers/optimise/jobs/route";
+import { POST as optimiseLouvers } from "@/app/api/projects/[projectId]/louvers/optimise/route";
 import { PUT as saveLayout } from "@/app/api/projects/[projectId]/layout/route";
 import { POST as restoreRevision } from "@/app/api/projects/[projectId]/revisions/[number]/restore/route";
 import { PATCH as patchProject } from "@/app/api/projects/[projectId]/route";
@@ -22,8 +28,9 @@ import { PUT as assignSeat } from "@/app/api/projects/[projectId]/seats/[seatId]
 import { POST as uploadUnderlay } from "@/app/api/projects/[projectId]/underlay/route";
 import { POST as createProject } from "@/app/api/projects/route";
 import {
-  auditLog, computeResults, invitations, layoutRevisions, memberships, organisations, passwordResets, projects, scenarios, seats, sessions, uploads, users,
+  auditLog, computeResults, invitations, layoutRevisions, memberships, organisations, panelProducts, passwordResets, projects, scenarios, seats, sessions, uploads, users,
 } from "@/db/schema";
+import { CATALOGUE_COLUMNS } from "@/lib/catalogue/schema";
 import { demoLayout } from "@/lib/demo/layout";
 import { emptyLayout } from "@/lib/layout/schema";
 import { WINTER_DESIGN } from "@/lib/scenarios/schema";
@@ -31,7 +38,7 @@ import { call, createMember, fieldPaths, imageForm, invite, organisationWithEver
 import { closeDatabase, countAll, useTemporaryUploadDir } from "../support/db";
 import { ROUTE_ACTIONS } from "../support/routes";
 
-const TABLES = { users, organisations, memberships, sessions, invitations, passwordResets, projects, layoutRevisions, seats, scenarios, computeResults, uploads, auditLog };
+const TABLES = { users, organisations, memberships, sessions, invitations, passwordResets, projects, layoutRevisions, seats, scenarios, computeResults, uploads, panelProducts, auditLog };
 const long = (n: number) => "x".repeat(n);
 const longEmail = `${"a".repeat(250)}@example.test`;
 
@@ -166,6 +173,18 @@ const BODY_ROUTES: Record<string, BodyRoute> = {
       { name: "a bad id in the path", body: { role: "designer" }, params: { membershipId: "12" }, fields: ["params.membershipId"] },
     ],
   },
+  "louvers/cavity-table POST": {
+    handler: requestCavityTable,
+    method: "POST",
+    token: (fx) => fx.org.designer.token,
+    cases: () => [
+      { name: "missing fields", body: {}, fields: ["finish", "wallEmissivity"] },
+      { name: "wrong types", body: { wallEmissivity: "0.9", finish: 1, stepDeg: "5" }, fields: ["finish", "stepDeg", "wallEmissivity"] },
+      { name: "over-long strings", body: { wallEmissivity: 0.9, finish: long(300) }, fields: ["finish"] },
+      { name: "unknown fields", body: { wallEmissivity: 0.9, finish: "diffuse", solver: "montecarlo" }, fields: ["solver"] },
+      { name: "out of range", body: { wallEmissivity: 0, finish: "specular", stepDeg: 0.1 }, fields: ["stepDeg", "wallEmissivity"] },
+    ],
+  },
   "me/settings PATCH": {
     handler: patchSettings,
     method: "PATCH",
@@ -289,6 +308,62 @@ const BODY_ROUTES: Record<string, BodyRoute> = {
       { name: "revision 0", body: { scenarioId: fx.scenarioId, revision: 0 }, fields: ["revision"] },
     ],
   },
+  "projects/[projectId]/louvers/optimise POST": {
+    handler: optimiseLouvers,
+    method: "POST",
+    token: (fx) => fx.org.facility_manager.token,
+    params: (fx) => ({ projectId: fx.projectId }),
+    cases: (fx) => [
+      { name: "missing fields", body: {}, fields: ["scenarioId"] },
+      { name: "wrong types", body: { scenarioId: 5 }, fields: ["scenarioId"] },
+      { name: "over-long strings", body: { scenarioId: long(300) }, fields: ["scenarioId"] },
+      { name: "unknown fields", body: { scenarioId: fx.scenarioId, method: "heuristic" }, fields: ["method"] },
+      { name: "a bad id in the path", body: { scenarioId: fx.scenarioId }, params: { projectId: "12" }, fields: ["params.projectId"] },
+    ],
+  },
+  "projects/[projectId]/louvers/optimise/jobs POST": {
+    handler: optimiseLouversJob,
+    method: "POST",
+    token: (fx) => fx.org.designer.token,
+    params: (fx) => ({ projectId: fx.projectId }),
+    cases: (fx) => [
+      { name: "missing fields", body: {}, fields: ["scenarioId"] },
+      { name: "wrong types", body: { scenarioId: [fx.scenarioId] }, fields: ["scenarioId"] },
+      { name: "over-long strings", body: { scenarioId: long(300) }, fields: ["scenarioId"] },
+      { name: "unknown fields", body: { scenarioId: fx.scenarioId, seats: ["seat-oo-1"] }, fields: ["seats"] },
+    ],
+  },
+  "projects/[projectId]/louvers/apply POST": {
+    handler: applyLouvers,
+    method: "POST",
+    token: (fx) => fx.org.designer.token,
+    params: (fx) => ({ projectId: fx.projectId }),
+    cases: () => [
+      { name: "missing fields", body: {}, fields: ["baseRevision", "panels"] },
+      { name: "wrong types", body: { baseRevision: "2", panels: { id: "panel-oo-1" }, message: 5 }, fields: ["baseRevision", "message", "panels"] },
+      { name: "over-long strings", body: { baseRevision: 2, panels: [{ id: long(300), openingAngleDeg: 90 }], message: long(300) }, fields: ["message", "panels.0.id"] },
+      { name: "unknown fields", body: { baseRevision: 2, panels: [{ id: "panel-oo-1", openingAngleDeg: 90, axisDeg: 0 }], force: true }, fields: ["force", "panels.0.axisDeg"] },
+      { name: "out of range", body: { baseRevision: 0, panels: [{ id: "panel-oo-1", openingAngleDeg: 181 }, { id: "panel-oo-2", openingAngleDeg: -1 }] }, fields: ["baseRevision", "panels.0.openingAngleDeg", "panels.1.openingAngleDeg"] },
+      { name: "a panel listed twice", body: { baseRevision: 2, panels: [{ id: "panel-oo-1", openingAngleDeg: 90 }, { id: "panel-oo-1", openingAngleDeg: 60 }] }, fields: ["panels.1.id"] },
+      { name: "no panels", body: { baseRevision: 2, panels: [] }, fields: ["panels"] },
+    ],
+  },
+  "projects/[projectId]/louvers/sweep POST": {
+    handler: sweepLouver,
+    method: "POST",
+    token: (fx) => fx.org.facility_manager.token,
+    params: (fx) => ({ projectId: fx.projectId }),
+    cases: (fx) => [
+      { name: "missing fields", body: {}, fields: ["panelId", "scenarioId"] },
+      { name: "wrong types", body: { scenarioId: 5, panelId: 7, anglesDeg: "90", revision: "1" }, fields: ["anglesDeg", "panelId", "revision", "scenarioId"] },
+      { name: "over-long strings", body: { scenarioId: fx.scenarioId, panelId: long(300) }, fields: ["panelId"] },
+      { name: "unknown fields", body: { scenarioId: fx.scenarioId, panelId: "panel-oo-1", stepDeg: 5 }, fields: ["stepDeg"] },
+      { name: "angles out of range", body: { scenarioId: fx.scenarioId, panelId: "panel-oo-1", anglesDeg: [90, 200, -1] }, fields: ["anglesDeg.1", "anglesDeg.2"] },
+      { name: "an angle outside the louver's range", body: { scenarioId: fx.scenarioId, panelId: "panel-oo-1", anglesDeg: [90, 10] }, fields: ["anglesDeg.1"] },
+      { name: "a panel without louver", body: { scenarioId: fx.scenarioId, panelId: "panel-mt-1" }, fields: ["panelId"] },
+      { name: "a panel that does not exist", body: { scenarioId: fx.scenarioId, panelId: "panel-nowhere" }, fields: ["panelId"] },
+    ],
+  },
 };
 
 function scenarioCases(_fx: Fx, name: string): BadCase[] {
@@ -312,13 +387,15 @@ function scenarioCases(_fx: Fx, name: string): BadCase[] {
 const BODILESS = ["auth/sign-out POST"];
 /** Routes that take a multipart upload instead of JSON (tested below). */
 const MULTIPART = ["projects/[projectId]/underlay POST"];
+/** Routes that take a CSV file, raw or as a multipart field (tested below; rows in tests/integration/catalogue.test.ts). */
+const CSV_UPLOADS = ["catalogue/import POST"];
 
 test("every POST/PUT/PATCH route has bad-input cases (or is known to take no body)", () => {
   const writes = Object.entries(ROUTE_ACTIONS).flatMap(([route, methods]) =>
     Object.keys(methods).filter((m) => m === "POST" || m === "PUT" || m === "PATCH").map((m) => `${route} ${m}`),
   );
   expect(writes.length).toBeGreaterThan(5);
-  expect([...Object.keys(BODY_ROUTES), ...BODILESS, ...MULTIPART].sort()).toEqual(writes.sort());
+  expect([...Object.keys(BODY_ROUTES), ...BODILESS, ...MULTIPART, ...CSV_UPLOADS].sort()).toEqual(writes.sort());
 });
 
 describe.each(Object.entries(BODY_ROUTES).map(([key, route]) => ({ key, route })))("$key", ({ route }) => {
@@ -383,6 +460,34 @@ describe("projects/[projectId]/underlay POST", () => {
   });
 });
 
+describe("catalogue/import POST", () => {
+  const header = CATALOGUE_COLUMNS.join(",");
+  const csvForm = (content: string | Uint8Array<ArrayBuffer>, field = "file") => {
+    const form = new FormData();
+    form.set(field, new Blob([content], { type: "text/csv" }), "catalogue.csv");
+    return form;
+  };
+  test.each([
+    { name: "JSON instead of CSV", options: { body: { products: [] } }, status: 415, fields: ["file"] },
+    { name: "a form without the file field", options: { formData: csvForm(`${header}\nA,1,1,5,1.1,0.9,,,,\n`, "csv") }, status: 400, fields: ["file"] },
+    // "name" then a byte that starts no UTF-8 sequence (Latin-1 ÿ).
+    { name: "a file that is not UTF-8", options: { formData: csvForm(new Uint8Array([0x6e, 0x61, 0x6d, 0x65, 0xff, 0x0a])) }, status: 400, fields: ["line 1 · (file)"] },
+    {
+      name: "a bad row next to a good one",
+      options: { formData: csvForm(`${header}\nGood,1,1,5,1.1,0.9,,,,\nBad,1,1,5,1.1,7,,,,\n`) },
+      status: 400,
+      fields: ["line 3 · emissivity"],
+    },
+    { name: "an unknown column", options: { rawBody: `${header},colour\nA,1,1,5,1.1,0.9,,,,,red\n`, headers: { "content-type": "text/csv" } }, status: 400, fields: ["line 1 · colour"] },
+  ])("$name is $status naming $fields, and nothing is written", async ({ options, status, fields }) => {
+    const before = await countAll(TABLES);
+    const reply = await call(importCatalogue, "POST", { token: fx.org.designer.token, ...options });
+    expect(reply.status, JSON.stringify(reply.body)).toBe(status);
+    expect(fieldPaths(reply.body)).toEqual(fields);
+    expect(await countAll(TABLES)).toEqual(before);
+  });
+});
+
 describe("query strings", () => {
   test("GET layout with a bad ?revision is 400 at query.revision", async () => {
     const { GET } = await import("@/app/api/projects/[projectId]/layout/route");
@@ -394,6 +499,29 @@ describe("query strings", () => {
     const unknown = await call(GET, "GET", { token: fx.org.designer.token, path: "/api/x?rev=1", params: { projectId: fx.projectId } });
     expect(unknown.status).toBe(400);
     expect(fieldPaths(unknown.body)).toEqual(["query.rev"]);
+  });
+
+  test.each([
+    { route: "panels/performance", load: () => import("@/app/api/projects/[projectId]/panels/performance/route") },
+    { route: "loads", load: () => import("@/app/api/projects/[projectId]/loads/route") },
+    { route: "energy", load: () => import("@/app/api/projects/[projectId]/energy/route") },
+  ])("GET $route with a bad query is 400 naming each bad field, and nothing is written", async ({ load }) => {
+    const { GET } = await load();
+    const cases: { query: string; fields: string[] }[] = [
+      { query: "", fields: ["query.scenarioId"] },
+      { query: "?scenarioId=winter", fields: ["query.scenarioId"] },
+      { query: `?scenarioId=${fx.scenarioId}&revision=0`, fields: ["query.revision"] },
+      { query: `?scenarioId=${fx.scenarioId}&revision=1.5`, fields: ["query.revision"] },
+      { query: "?scenarioId=x&revision=abc", fields: ["query.revision", "query.scenarioId"] },
+      { query: `?scenarioId=${fx.scenarioId}&angle=90`, fields: ["query.angle"] },
+    ];
+    for (const c of cases) {
+      const before = await countAll(TABLES);
+      const reply = await call(GET, "GET", { token: fx.org.designer.token, path: `/api/x${c.query}`, params: { projectId: fx.projectId } });
+      expect(reply.status, c.query).toBe(400);
+      expect(fieldPaths(reply.body), c.query).toEqual(c.fields);
+      expect(await countAll(TABLES)).toEqual(before);
+    }
   });
 });
 

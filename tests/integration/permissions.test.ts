@@ -12,9 +12,14 @@ import { GET as getSession } from "@/app/api/auth/session/route";
 import { POST as signIn } from "@/app/api/auth/sign-in/route";
 import { POST as signOut } from "@/app/api/auth/sign-out/route";
 import { POST as signUp } from "@/app/api/auth/sign-up/route";
+import { POST as importCatalogue } from "@/app/api/catalogue/import/route";
+import { DELETE as deleteProduct } from "@/app/api/catalogue/products/[productId]/route";
+import { GET as listProducts } from "@/app/api/catalogue/products/route";
 import { GET as health } from "@/app/api/health/route";
 import { GET as describeInvitation } from "@/app/api/invitations/[token]/route";
 import { POST as acceptInvitation } from "@/app/api/invitations/accept/route";
+import { GET as getJob } from "@/app/api/jobs/[jobId]/route";
+import { POST as requestCavityTable } from "@/app/api/louvers/cavity-table/route";
 import { GET as mySeats } from "@/app/api/me/seats/route";
 import { PATCH as patchSettings } from "@/app/api/me/settings/route";
 import { DELETE as removeMember, PATCH as changeRole } from "@/app/api/members/[membershipId]/route";
@@ -22,6 +27,13 @@ import { DELETE as revokeInvitation } from "@/app/api/members/invitations/[invit
 import { POST as createInvitation } from "@/app/api/members/invitations/route";
 import { GET as listMembers } from "@/app/api/members/route";
 import { POST as runCompute } from "@/app/api/projects/[projectId]/compute/route";
+import { GET as getEnergy } from "@/app/api/projects/[projectId]/energy/route";
+import { GET as getLoads } from "@/app/api/projects/[projectId]/loads/route";
+import { POST as sweepLouver } from "@/app/api/projects/[projectId]/louvers/sweep/route";
+import { POST as applyLouvers } from "@/app/api/projects/[projectId]/louvers/apply/route";
+import { POST as optimiseLouversJob } from "@/app/api/projects/[projectId]/louvers/optimise/jobs/route";
+import { POST as optimiseLouvers } from "@/app/api/projects/[projectId]/louvers/optimise/route";
+import { GET as getPanelPerformance } from "@/app/api/projects/[projectId]/panels/performance/route";
 import { GET as getLayout, PUT as saveLayout } from "@/app/api/projects/[projectId]/layout/route";
 import { POST as restoreRevision } from "@/app/api/projects/[projectId]/revisions/[number]/restore/route";
 import { GET as listRevisions } from "@/app/api/projects/[projectId]/revisions/route";
@@ -35,9 +47,13 @@ import { GET as getProject, PATCH as patchProject } from "@/app/api/projects/[pr
 import { GET as listProjects, POST as createProject } from "@/app/api/projects/route";
 import { auditLog } from "@/db/schema";
 import { ROLES, type Role } from "@/lib/auth/roles";
+import { CATALOGUE_COLUMNS } from "@/lib/catalogue/schema";
 import { demoLayout } from "@/lib/demo/layout";
 import { WINTER_DESIGN } from "@/lib/scenarios/schema";
 import { can, PERMISSIONS } from "@/lib/permissions";
+import { startJob } from "@/lib/jobs";
+import { storeLouverTable } from "@/lib/louvers/cavity-table-cache";
+import { buildLouverTable } from "@/lib/panels/louverTable";
 import {
   call, createMember, imageForm, invite, organisationWithEveryRole, PASSWORD, signInAs, uniqueEmail,
   type Account, type CallOptions, type RouteHandler,
@@ -72,6 +88,33 @@ async function headRevision(fx: Fixture): Promise<number> {
   return reply.body.headRevision;
 }
 
+/** A one-product catalogue file with a name no other call has used. */
+function catalogueCsv(): string {
+  return `${CATALOGUE_COLUMNS.join(",")}\nMatrix panel ${crypto.randomUUID()},0.6,1.2,5.2,1.1,0.93,,,,\n`;
+}
+
+/** A fresh product of the organisation (imported by its admin), for calls that delete one. */
+async function importedProductId(fx: Fixture): Promise<string> {
+  const reply = await call<{ products: { id: string }[] }>(importCatalogue, "POST", {
+    token: fx.org.admin.token,
+    rawBody: catalogueCsv(),
+    headers: { "content-type": "text/csv" },
+  });
+  expect(reply.status, JSON.stringify(reply.body)).toBe(201);
+  return reply.body.products[0]!.id;
+}
+
+/**
+ * A performance/loads/energy request on the demo plan. The demo's louver cavity table is stored
+ * first (a fraction of a second to build), so no row waits on the worker pool.
+ */
+let demoTableStored: Promise<void> | null = null;
+async function performanceRequest(fx: Fixture): Promise<CallOptions> {
+  demoTableStored ??= storeLouverTable(buildLouverTable({ finish: "diffuse", wallEmissivity: 0.9 }));
+  await demoTableStored;
+  return { params: { projectId: fx.projectId }, path: `/api/x?scenarioId=${fx.scenarioId}&revision=${fx.demoRevision}` };
+}
+
 const REQUESTS: Record<string, RequestSpec> = {
   "auth/password-reset/confirm POST": {
     handler: confirmReset,
@@ -96,6 +139,17 @@ const REQUESTS: Record<string, RequestSpec> = {
     ok: 201,
     build: async () => ({ body: { name: "New Person", email: uniqueEmail("matrix-signup"), password: PASSWORD, organisationName: "Fresh Org" } }),
   },
+  "catalogue/products GET": { handler: listProducts, ok: 200, build: async () => ({}) },
+  "catalogue/import POST": {
+    handler: importCatalogue,
+    ok: 201,
+    build: async () => ({ rawBody: catalogueCsv(), headers: { "content-type": "text/csv" } }),
+  },
+  "catalogue/products/[productId] DELETE": {
+    handler: deleteProduct,
+    ok: 204,
+    build: async (fx) => ({ params: { productId: await importedProductId(fx) } }),
+  },
   "health GET": { handler: health as RouteHandler, ok: 200, build: async () => ({}) },
   "invitations/[token] GET": {
     handler: describeInvitation,
@@ -106,6 +160,24 @@ const REQUESTS: Record<string, RequestSpec> = {
     handler: acceptInvitation,
     ok: 200,
     build: async (fx) => ({ body: { token: (await invite(fx.org.admin, "occupant")).token, name: "Joiner", password: PASSWORD } }),
+  },
+  "jobs/[jobId] GET": {
+    handler: getJob,
+    ok: 200,
+    // A small job of the organisation: 200 whatever state it is in by the time it is read.
+    build: async (fx) => ({
+      params: { jobId: startJob(fx.org.admin, "groove.trace", { openingAngleDeg: 60, wallEmissivity: 0.5, reflection: "diffuse", rays: 1_000 }) },
+    }),
+  },
+  "louvers/cavity-table POST": {
+    handler: requestCavityTable,
+    ok: 200,
+    // A stored table is answered at once (200); the 202 job path is in tests/integration/jobs.test.ts.
+    build: async () => {
+      const body = { finish: "specular", wallEmissivity: 0.8, stepDeg: 5 } as const;
+      await storeLouverTable(buildLouverTable(body));
+      return { body };
+    },
   },
   "me/seats GET": { handler: mySeats, ok: 200, build: async () => ({}) },
   "me/settings PATCH": { handler: patchSettings, ok: 200, build: async () => ({ body: { unitSystem: "si" } }) },
@@ -130,6 +202,52 @@ const REQUESTS: Record<string, RequestSpec> = {
     handler: runCompute,
     ok: 200,
     build: async (fx) => ({ params: { projectId: fx.projectId }, body: { scenarioId: fx.scenarioId, revision: fx.demoRevision } }),
+  },
+  "projects/[projectId]/panels/performance GET": {
+    handler: getPanelPerformance,
+    ok: 200,
+    build: performanceRequest,
+  },
+  "projects/[projectId]/loads GET": {
+    handler: getLoads,
+    ok: 200,
+    build: performanceRequest,
+  },
+  "projects/[projectId]/energy GET": {
+    handler: getEnergy,
+    ok: 200,
+    build: performanceRequest,
+  },
+  "projects/[projectId]/louvers/sweep POST": {
+    handler: sweepLouver,
+    ok: 200,
+    // Two angles of a louvered demo panel: the table is stored first, as for the reads above.
+    build: async (fx) => {
+      await performanceRequest(fx);
+      return { params: { projectId: fx.projectId }, body: { scenarioId: fx.scenarioId, panelId: "panel-oo-1", anglesDeg: [60, 180], revision: fx.demoRevision } };
+    },
+  },
+  "projects/[projectId]/louvers/optimise POST": {
+    handler: optimiseLouvers,
+    ok: 200,
+    // The search runs in the worker pool; the demo's cavity table is stored first, as above.
+    build: async (fx) => {
+      await performanceRequest(fx);
+      return { params: { projectId: fx.projectId }, body: { scenarioId: fx.scenarioId } };
+    },
+  },
+  "projects/[projectId]/louvers/optimise/jobs POST": {
+    handler: optimiseLouversJob,
+    ok: 202,
+    build: async (fx) => {
+      await performanceRequest(fx);
+      return { params: { projectId: fx.projectId }, body: { scenarioId: fx.scenarioId } };
+    },
+  },
+  "projects/[projectId]/louvers/apply POST": {
+    handler: applyLouvers,
+    ok: 201,
+    build: async (fx) => ({ params: { projectId: fx.projectId }, body: { baseRevision: await headRevision(fx), panels: [{ id: "panel-oo-1", openingAngleDeg: 90 }] } }),
   },
   "projects/[projectId]/scenarios GET": { handler: listScenarios, ok: 200, build: async (fx) => ({ params: { projectId: fx.projectId } }) },
   "projects/[projectId]/scenarios POST": {

@@ -1,0 +1,64 @@
+/**
+ * Automatic louver settings on the demo plan (lib/demo/layout: 48 seats, 11 louvered panels in
+ * 2 rooms) under the winter design: problem set-up (view factors, candidate outputs), search
+ * per room, and the whole call. The budget is 2 s per optimisation. Prints figures; asserts
+ * nothing.
+ *
+ * Run: npx tsx bench/optimise.bench.ts
+ */
+import { performance } from "node:perf_hooks";
+import { louverTableFor } from "../lib/compute/comfort";
+import { demoLayout } from "../lib/demo/layout";
+import { buildLouverProblem, optimiseLouvers, solveLouverProblem } from "../lib/louvers/optimise";
+import type { LouverTable } from "../lib/panels";
+import { SUMMER_DESIGN, WINTER_DESIGN } from "../lib/scenarios/schema";
+
+const ROUNDS = 5;
+const BUDGET_MS = 2000;
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)]!;
+}
+
+function time(label: string, run: () => unknown): number {
+  run(); // warm-up
+  const samples: number[] = [];
+  for (let i = 0; i < ROUNDS; i++) {
+    const t0 = performance.now();
+    run();
+    samples.push(performance.now() - t0);
+  }
+  const m = median(samples);
+  console.log(`  ${label.padEnd(46)} median ${m.toFixed(1).padStart(7)} ms   min ${Math.min(...samples).toFixed(1).padStart(7)} ms   max ${Math.max(...samples).toFixed(1).padStart(7)} ms`);
+  return m;
+}
+
+const layout = demoLayout();
+const louverTables = new Map<string, LouverTable>();
+for (const p of layout.panels) if (p.louver) louverTableFor(p.louver, louverTables); // the server cache's job
+console.log(`louver optimisation — demo plan: ${layout.seats.length} seats, ${layout.panels.filter((p) => p.louver).length} louvered panels, ${layout.zones.length} zones (${ROUNDS} rounds after a warm-up)`);
+
+// A demanding variant: a cooler room (19 °C air) and every zone asking for PMV −0.2…+0.2, so the
+// search has work to do in the open office (10 louvered panels, 40 seats).
+const demanding = {
+  ...WINTER_DESIGN,
+  conditions: { ...WINTER_DESIGN.conditions, airTemperatureC: 19 },
+};
+const tightLayout = { ...layout, zones: layout.zones.map((z) => ({ ...z, target: { kind: "pmvBand" as const, minPmv: -0.2, maxPmv: 0.2 } })) };
+
+for (const [name, scenario, plan] of [["winter", WINTER_DESIGN, layout], ["summer", SUMMER_DESIGN, layout], ["winter 19 °C, band ±0.2", demanding, tightLayout]] as const) {
+  const layout = plan;
+  const problem = buildLouverProblem(layout, scenario.conditions, { louverTables });
+  time(`${name}: problem set-up`, () => buildLouverProblem(layout, scenario.conditions, { louverTables }));
+  const whole = time(`${name}: search`, () => solveLouverProblem(problem));
+  const total = time(`${name}: whole call (set-up + search)`, () => optimiseLouvers(layout, scenario.conditions, { louverTables }));
+  const r = optimiseLouvers(layout, scenario.conditions, { louverTables });
+  for (const room of r.rooms) {
+    console.log(`    room ${room.roomId.padEnd(14)} ${room.method.padEnd(10)} ${String(room.combinations).padStart(16)} combinations, ${room.evaluations} PMV evaluations`);
+  }
+  const inBefore = r.seats.filter((s) => s.inTargetBefore).length;
+  const inAfter = r.seats.filter((s) => s.inTarget).length;
+  console.log(`    seats in target ${inBefore} → ${inAfter} of ${r.seats.length}; output ${r.totalOutputBeforeW.toFixed(0)} W → ${r.totalOutputW.toFixed(0)} W; ${r.unreachable.length} unreachable`);
+  console.log(`    search ${(whole / total * 100).toFixed(0)} % of the call; budget ${BUDGET_MS} ms → ${((total / BUDGET_MS) * 100).toFixed(0)} % of it`);
+}
