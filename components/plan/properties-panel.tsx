@@ -1,7 +1,10 @@
 "use client";
 
 import { memo, useCallback, type Dispatch } from "react";
+import { ProductPicker } from "@/components/catalogue/product-picker";
+import { ZoneScheduleEditor } from "@/components/louvers/zone-schedule-editor";
 import { OpeningProperties, PanelProperties, RoomProperties, SeatProperties, ZoneProperties } from "@/components/plan/element-forms";
+import { applyProductToPanel } from "@/lib/catalogue/apply";
 import type { Layout } from "@/lib/layout/schema";
 import type { EditorAction } from "@/lib/plan/editor";
 import { findElement, polygonArea, type AnyElement } from "@/lib/plan/geometry";
@@ -47,12 +50,41 @@ export const PropertiesPanel = memo(function PropertiesPanel({ layout, selection
       return (
         <div className="space-y-2">
           <p className="text-xs text-muted">In {layout.rooms.find((r) => r.id === item.element.roomId)?.name ?? "no room"}</p>
+          <ProductPicker
+            value={item.element.productId}
+            disabled={readOnly}
+            onSelect={(product) =>
+              apply({ kind: "panel", element: product ? applyProductToPanel(item.element, product) : { ...item.element, productId: null } })
+            }
+          />
           <PanelProperties key={item.element.id} element={item.element} {...common} onApply={(element) => apply({ kind: "panel", element })} />
         </div>
       );
     case "seat":
       return <SeatProperties key={item.element.id} element={item.element} {...common} onApply={(element) => apply({ kind: "seat", element })} />;
-    case "zone":
-      return <ZoneProperties key={item.element.id} element={item.element} {...common} onApply={(element) => apply({ kind: "zone", element })} />;
+    case "zone": {
+      const zone = item.element;
+      // The properties form covers name and target; the schedule has its own form below.
+      return (
+        <div className="space-y-3">
+          <ZoneProperties
+            key={zone.id}
+            element={zone}
+            {...common}
+            onApply={(element) => apply({ kind: "zone", element })}
+          />
+          <ZoneScheduleEditor
+            key={`${zone.id}-schedule`}
+            zoneName={zone.name}
+            schedule={zone.schedule}
+            readOnly={readOnly}
+            onApply={(schedule) => {
+              const { schedule: _previous, ...rest } = zone;
+              apply({ kind: "zone", element: schedule ? { ...rest, schedule } : rest });
+            }}
+          />
+        </div>
+      );
+    }
   }
 });

@@ -196,4 +196,6 @@ export const zoneFormSchema = (zone: Zone) =>
     outline: zone.outline,
     name: v.name,
     target: v.target.kind === "pmvBand" ? { kind: "pmvBand", minPmv: v.target.minPmv, maxPmv: v.target.maxPmv } : { kind: "category", category: v.target.category },
+    // The schedule has its own form: this one keeps it as it is.
+    ...(zone.schedule ? { schedule: zone.schedule } : {}),
   }));

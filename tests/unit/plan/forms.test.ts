@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { Panel } from "@/lib/layout/schema";
-import { panelFormSchema, panelToForm, roomFormSchema, roomToForm, seatFormSchema, seatToForm } from "@/lib/plan/forms";
+import { panelFormSchema, panelToForm, roomFormSchema, roomToForm, seatFormSchema, seatToForm, zoneFormSchema, zoneToForm } from "@/lib/plan/forms";
+import type { Zone } from "@/lib/layout/schema";
 import { describeLayoutPath } from "@/lib/plan/paths";
 import { sampleLayout } from "./helpers";
 
@@ -59,6 +60,23 @@ describe("properties forms", () => {
     const seat = { ...sampleLayout().seats[0]!, clo: 0.7, met: 1.1 };
     const parsed = seatFormSchema(seat, "si").parse({ ...seatToForm(seat, "si"), clo: null, met: null });
     expect(parsed).toMatchObject({ clo: null, met: null, position: seat.position });
+  });
+});
+
+describe("zone properties form", () => {
+  it("applying name and target keeps the zone's schedule (edited in its own form)", () => {
+    const zone: Zone = {
+      id: "z1",
+      name: "Window desks",
+      outline: [{ x: 0, y: 0 }, { x: 4, y: 0 }, { x: 4, y: 3 }],
+      target: { kind: "category", category: "B" },
+      schedule: { periods: [{ days: ["mon", "tue"], startHour: 8, endHour: 18, louver: { mode: "automatic" } }] },
+    };
+    const applied = zoneFormSchema(zone).parse({ ...zoneToForm(zone), name: "Window row" });
+    expect(applied.name).toBe("Window row");
+    expect(applied.schedule).toEqual(zone.schedule);
+    const { schedule: _dropped, ...withoutSchedule } = zone;
+    expect("schedule" in zoneFormSchema(withoutSchedule).parse(zoneToForm(withoutSchedule))).toBe(false);
   });
 });
 

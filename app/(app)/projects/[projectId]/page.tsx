@@ -58,6 +58,12 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
               Results
             </Link>
             <Link
+              href={`/projects/${project.id}/louvers`}
+              className="rounded-md border border-line bg-white px-3.5 py-2 text-sm font-medium text-ink hover:border-accent hover:text-accent-strong"
+            >
+              Louvers
+            </Link>
+            <Link
               href={`/projects/${project.id}/plan`}
               className="rounded-md bg-accent px-3.5 py-2 text-sm font-medium text-white hover:bg-accent-strong"
             >
