@@ -30,6 +30,23 @@ const columns = {
   removedInRevision: seats.removedInRevision,
 };
 
+/** A member who can be given a seat. */
+export interface AssignableMember {
+  userId: string;
+  name: string;
+  email: string;
+}
+
+/** The organisation's members, for the occupant choice of a seat. */
+export async function listAssignableMembers(organisationId: string): Promise<AssignableMember[]> {
+  return getDb()
+    .select({ userId: users.id, name: users.name, email: users.email })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(eq(memberships.organisationId, organisationId))
+    .orderBy(asc(users.name));
+}
+
 export async function listProjectSeats(organisationId: string, projectId: string): Promise<SeatRow[]> {
   await getProject(organisationId, projectId);
   return getDb().select(columns).from(seats).leftJoin(users, eq(users.id, seats.occupantUserId)).where(eq(seats.projectId, projectId)).orderBy(asc(seats.label));

@@ -2,22 +2,17 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Suspense } from "react";
+import { ProjectBreadcrumb } from "@/components/projects/breadcrumb";
 import { LayoutCounts } from "@/components/projects/layout-counts";
 import { RevisionList } from "@/components/projects/revision-list";
 import { PageHeader } from "@/components/ui/page-header";
 import { SkeletonRows } from "@/components/ui/skeleton";
 import { requireMember } from "@/lib/auth/guard";
-import { AppError } from "@/lib/http/errors";
 import { projectIdParams } from "@/lib/projects/schemas";
+import { orNotFound } from "@/lib/projects/page-guard";
 import { getLayout, getProject, listRevisions } from "@/lib/projects/service";
 
 export const metadata: Metadata = { title: "Project" };
-
-/** The lib answers unknown and other organisations' ids with AppError("not_found"): both are a 404 page. */
-function notFoundOnMissing(error: unknown): never {
-  if (error instanceof AppError && error.code === "not_found") notFound();
-  throw error;
-}
 
 export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
   const member = await requireMember("projects:read");
@@ -29,18 +24,11 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   // leaving the promise's rejection unhandled (RevisionList still sees it).
   const revisions = listRevisions(member.organisationId, projectId);
   revisions.catch(() => undefined);
-  const [project, head] = await Promise.all([getProject(member.organisationId, projectId), getLayout(member.organisationId, projectId)]).catch(
-    notFoundOnMissing,
-  );
+  const [project, head] = await orNotFound(Promise.all([getProject(member.organisationId, projectId), getLayout(member.organisationId, projectId)]));
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm text-muted">
-        <Link href="/projects" className="hover:underline">
-          Projects
-        </Link>{" "}
-        / <span className="text-ink">{project.name}</span>
-      </nav>
+      <ProjectBreadcrumb project={project} />
       <PageHeader
         title={project.name}
         actions={
@@ -56,6 +44,12 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
               className="rounded-md border border-line bg-white px-3.5 py-2 text-sm font-medium text-ink hover:border-accent hover:text-accent-strong"
             >
               Results
+            </Link>
+            <Link
+              href={`/projects/${project.id}/seats`}
+              className="rounded-md border border-line bg-white px-3.5 py-2 text-sm font-medium text-ink hover:border-accent hover:text-accent-strong"
+            >
+              Seats
             </Link>
             <Link
               href={`/projects/${project.id}/louvers`}

@@ -1,15 +1,15 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
+import { ProjectBreadcrumb } from "@/components/projects/breadcrumb";
 import { PrintButton } from "@/components/results/print-button";
 import { ComfortReport } from "@/components/results/report";
 import "@/components/results/report.css";
 import { requireMember } from "@/lib/auth/guard";
 import { runCompute } from "@/lib/compute/service";
-import { AppError } from "@/lib/http/errors";
 import { can } from "@/lib/permissions";
 import { projectIdParams } from "@/lib/projects/schemas";
+import { orNotFound } from "@/lib/projects/page-guard";
 import { getLayout, getProject, listRevisions } from "@/lib/projects/service";
 import { listScenarios } from "@/lib/scenarios/service";
 
@@ -19,11 +19,6 @@ const searchSchema = z.object({
   scenario: z.uuid().optional(),
   revision: z.coerce.number().int().min(1).optional(),
 });
-
-function notFoundOnMissing(error: unknown): never {
-  if (error instanceof AppError && error.code === "not_found") notFound();
-  throw error;
-}
 
 /**
  * The printable comfort report of one revision under one scenario. It computes through the same
@@ -43,39 +38,31 @@ export default async function ReportPage({
   if (!parsedParams.success || !search.success) notFound();
   const { projectId } = parsedParams.data;
 
-  const [project, scenarios, revisions] = await Promise.all([
+  const [project, scenarios, revisions] = await orNotFound(Promise.all([
     getProject(member.organisationId, projectId),
     listScenarios(member.organisationId, projectId),
     listRevisions(member.organisationId, projectId),
-  ]).catch(notFoundOnMissing);
+  ]));
   const scenario = search.data.scenario ? scenarios.find((s) => s.id === search.data.scenario) : scenarios[0];
   if (!scenario) notFound();
   const revisionNumber = search.data.revision ?? project.headRevision;
   const revision = revisions.find((r) => r.number === revisionNumber);
   if (!revision) notFound();
 
-  const [layout, result] = await Promise.all([
+  const [layout, result] = await orNotFound(Promise.all([
     getLayout(member.organisationId, projectId, revisionNumber),
     runCompute(member, projectId, { scenarioId: scenario.id, revision: revisionNumber }),
-  ]).catch(notFoundOnMissing);
+  ]));
 
   return (
     <>
       <div className="no-print mb-6 flex flex-wrap items-center justify-between gap-3">
-        <nav aria-label="Breadcrumb" className="text-sm text-muted">
-          <Link href="/projects" className="hover:underline">
-            Projects
-          </Link>{" "}
-          /{" "}
-          <Link href={`/projects/${project.id}`} className="hover:underline">
-            {project.name}
-          </Link>{" "}
-          /{" "}
-          <Link href={`/projects/${project.id}/results?scenario=${scenario.id}&revision=${revisionNumber}`} className="hover:underline">
-            Results
-          </Link>{" "}
-          / <span className="text-ink">Report</span>
-        </nav>
+        <ProjectBreadcrumb
+          project={project}
+          trail={[{ href: `/projects/${project.id}/results?scenario=${scenario.id}&revision=${revisionNumber}`, label: "Results" }]}
+          current="Report"
+          className=""
+        />
         <PrintButton />
       </div>
       <ComfortReport
