@@ -7,6 +7,8 @@ import type { Member } from "@/lib/auth/session";
 import { parseCatalogueFile, productNameKey } from "@/lib/catalogue/csv";
 import type { CatalogueRowError, PanelProduct } from "@/lib/catalogue/schema";
 import { AppError, notFound, type FieldError } from "@/lib/http/errors";
+import { warmInBackground } from "@/lib/louvers/cavity-table-cache";
+import type { LouverTableParams } from "@/lib/panels";
 
 /** Rows per INSERT statement (a file holds at most 2,000). */
 const INSERT_CHUNK = 500;
@@ -111,7 +113,26 @@ export async function importProducts(member: Member, bytes: Uint8Array): Promise
     .from(panelProducts)
     .where(and(eq(panelProducts.organisationId, member.organisationId), inArray(panelProducts.id, ids)))
     .orderBy(asc(panelProducts.name));
+  // Tabulate the new products' louver cavities now, so no seat computation waits for them later.
+  warmInBackground(uniqueLouverParams(rows));
   return { imported: ids.length, products: rows.map(toProduct) };
+}
+
+function uniqueLouverParams(rows: ReadonlyArray<{ finish: "diffuse" | "specular" | null; wallEmissivity: number | null }>): LouverTableParams[] {
+  const byKey = new Map<string, LouverTableParams>();
+  for (const r of rows) {
+    if (r.finish === null || r.wallEmissivity === null) continue;
+    byKey.set(`${r.finish}/${r.wallEmissivity}`, { finish: r.finish, wallEmissivity: r.wallEmissivity });
+  }
+  return [...byKey.values()];
+}
+
+/** The louver finishes of every catalogue product (all organisations): warmed when the server starts. */
+export async function catalogueLouverTableParams(): Promise<LouverTableParams[]> {
+  const rows = await getDb()
+    .selectDistinct({ finish: panelProducts.finish, wallEmissivity: panelProducts.wallEmissivity })
+    .from(panelProducts);
+  return uniqueLouverParams(rows);
 }
 
 /** Deletes a product of the member's organisation; 404 for unknown and foreign ids alike. Panels that refer to it keep their values. */

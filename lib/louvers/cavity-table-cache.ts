@@ -210,6 +210,16 @@ export function startLouverTableWarmUp(): Promise<WarmUpEntry[]> {
   return state.warmUp;
 }
 
+/**
+ * Warms `list` in the background inside the running app (catalogue imports call it for their
+ * products' finishes). Outside the Next.js server (scripts, tests) or with
+ * SEATWISE_WARM_CACHES=0 it does nothing; tables are then computed on first request.
+ */
+export function warmInBackground(list: readonly LouverTableParams[]): void {
+  if (process.env.NEXT_RUNTIME !== "nodejs" || process.env.SEATWISE_WARM_CACHES === "0" || list.length === 0) return;
+  void warmLouverTables(list);
+}
+
 /** Forgets the in-memory tables (tests; the disk folder is left alone). */
 export function clearLouverTableMemory(): void {
   cache().tables.clear();
