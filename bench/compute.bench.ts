@@ -11,24 +11,14 @@ import { computeComfort, louverTableFor } from "../lib/compute/comfort";
 import type { LouverTable } from "../lib/panels";
 import { demoLayout } from "../lib/demo/layout";
 import { SUMMER_DESIGN, WINTER_DESIGN } from "../lib/scenarios/schema";
+import { median, timeSamples } from "./support";
 
 const WARMUP = 3;
 const ROUNDS = 15;
 const BUDGET_MS = 300;
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
-
 function time(label: string, run: () => unknown): number {
-  for (let i = 0; i < WARMUP; i++) run();
-  const samples: number[] = [];
-  for (let i = 0; i < ROUNDS; i++) {
-    const t0 = performance.now();
-    run();
-    samples.push(performance.now() - t0);
-  }
+  const samples = timeSamples(run, WARMUP, ROUNDS);
   const m = median(samples);
   console.log(`  ${label.padEnd(44)} median ${m.toFixed(1).padStart(6)} ms   min ${Math.min(...samples).toFixed(1).padStart(6)} ms   max ${Math.max(...samples).toFixed(1).padStart(6)} ms`);
   return m;

@@ -5,7 +5,6 @@
  *
  * Run: npx tsx bench/groove.bench.ts
  */
-import { performance } from "node:perf_hooks";
 import {
   grooveEmissivityDiffuseRadiosity,
   grooveEmissivitySpecularUnfolded,
@@ -13,25 +12,9 @@ import {
   traceGroove,
   type GrooveReflection,
 } from "../lib/viewfactor/groove";
+import { medianTime } from "./support";
 
 const TARGET_SE = 0.002;
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)] as number;
-}
-
-/** Median wall time (ms) of `rounds` calls after `warmup` calls. */
-function timeIt(fn: () => unknown, warmup: number, rounds: number): number {
-  for (let i = 0; i < warmup; i++) fn();
-  const times: number[] = [];
-  for (let i = 0; i < rounds; i++) {
-    const t0 = performance.now();
-    fn();
-    times.push(performance.now() - t0);
-  }
-  return median(times);
-}
 
 const pad = (s: string, n: number): string => s.padEnd(n);
 const fmt = (x: number, d = 1): string => x.toFixed(d);
@@ -52,7 +35,7 @@ const throughputCases: Array<[number, number, GrooveReflection]> = [
 for (const [openingAngleDeg, wallEmissivity, reflection] of throughputCases) {
   let bounces = 0;
   let rays = 0;
-  const ms = timeIt(
+  const ms = medianTime(
     () => {
       const r = traceGroove({ openingAngleDeg, wallEmissivity, reflection, rays: 200_000 });
       bounces = r.bounces;
@@ -79,7 +62,7 @@ for (const [openingAngleDeg, wallEmissivity, reflection] of seCases) {
   const pilot = traceGroove({ openingAngleDeg, wallEmissivity, reflection, rays: 20_000 });
   const rays = Math.max(18, Math.ceil(20_000 * (pilot.standardError / TARGET_SE) ** 2));
   let se = 0;
-  const ms = timeIt(
+  const ms = medianTime(
     () => {
       se = traceGroove({ openingAngleDeg, wallEmissivity, reflection, rays, seed: 2 }).standardError;
     },
@@ -100,4 +83,4 @@ const det: Array<[string, () => unknown]> = [
   ["unfolding, specular 1°, ε=0.5", () => grooveEmissivitySpecularUnfolded({ openingAngleDeg: 1, wallEmissivity: 0.5 })],
   ["parallel-plate channel, ε=0.5, depth 200, 128+256 strips", () => parallelPlateChannelEmissivity({ wallEmissivity: 0.5 })],
 ];
-for (const [name, fn] of det) console.log(`${pad(name, 58)}${fmt(timeIt(fn, 1, 5), 2)}`);
+for (const [name, fn] of det) console.log(`${pad(name, 58)}${fmt(medianTime(fn, 1, 5), 2)}`);

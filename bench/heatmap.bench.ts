@@ -14,6 +14,7 @@
  */
 import { sphereToPolygon, type Vec3 } from "../lib/viewfactor";
 import { pmvPpd, type PmvInput, type PmvResult } from "../lib/comfort";
+import { medianTime } from "./support";
 
 const ROOM_L_M = 30;
 const ROOM_W_M = 20;
@@ -53,12 +54,6 @@ function buildRoom(): Surface[] {
     out.push({ polygon: [[L, y0, 0], [L, y1, 0], [L, y1, H], [L, y0, H]], temperatureC: 20 });
   }
   return out;
-}
-
-function median(values: number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length % 2 === 1 ? (s[m] as number) : 0.5 * ((s[m - 1] as number) + (s[m] as number));
 }
 
 const surfaces = buildRoom();
@@ -101,23 +96,16 @@ function pmvPass(): void {
   }
 }
 
-function timeRuns(fn: () => void): number {
-  for (let r = 0; r < WARMUP_RUNS; r++) fn();
-  const times: number[] = [];
-  for (let r = 0; r < TIMED_RUNS; r++) {
-    const t0 = performance.now();
-    fn();
-    times.push(performance.now() - t0);
-  }
-  return median(times);
-}
-
-const totalMs = timeRuns(() => {
-  mrtPass();
-  pmvPass();
-});
-const mrtMs = timeRuns(mrtPass);
-const pmvMs = timeRuns(pmvPass);
+const totalMs = medianTime(
+  () => {
+    mrtPass();
+    pmvPass();
+  },
+  WARMUP_RUNS,
+  TIMED_RUNS,
+);
+const mrtMs = medianTime(mrtPass, WARMUP_RUNS, TIMED_RUNS);
+const pmvMs = medianTime(pmvPass, WARMUP_RUNS, TIMED_RUNS);
 
 let mrtSum = 0;
 let pmvSum = 0;

@@ -6,29 +6,18 @@
  *
  * Run: npx tsx bench/optimise.bench.ts
  */
-import { performance } from "node:perf_hooks";
 import { louverTableFor } from "../lib/compute/comfort";
 import { demoLayout } from "../lib/demo/layout";
 import { buildLouverProblem, optimiseLouvers, solveLouverProblem } from "../lib/louvers/optimise";
 import type { LouverTable } from "../lib/panels";
 import { SUMMER_DESIGN, WINTER_DESIGN } from "../lib/scenarios/schema";
+import { median, timeSamples } from "./support";
 
 const ROUNDS = 5;
 const BUDGET_MS = 2000;
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
-
 function time(label: string, run: () => unknown): number {
-  run(); // warm-up
-  const samples: number[] = [];
-  for (let i = 0; i < ROUNDS; i++) {
-    const t0 = performance.now();
-    run();
-    samples.push(performance.now() - t0);
-  }
+  const samples = timeSamples(run, 1, ROUNDS);
   const m = median(samples);
   console.log(`  ${label.padEnd(46)} median ${m.toFixed(1).padStart(7)} ms   min ${Math.min(...samples).toFixed(1).padStart(7)} ms   max ${Math.max(...samples).toFixed(1).padStart(7)} ms`);
   return m;

@@ -7,6 +7,7 @@
 import { performance } from "node:perf_hooks";
 import { pmvPpd, type PmvInput, type PmvResult } from "../lib/comfort";
 import { iso7730AnnexD } from "./reference/iso7730-annex-d";
+import { median } from "./support";
 
 const ROWS = 100_000;
 const WARMUP_ROUNDS = 3;
@@ -40,12 +41,6 @@ function makeRows(n: number): PmvInput[] {
     };
   }
   return rows;
-}
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length % 2 === 1 ? (s[m] as number) : 0.5 * ((s[m - 1] as number) + (s[m] as number));
 }
 
 let sink = 0;
