@@ -10,7 +10,8 @@ import path from "node:path";
  * Back up UPLOAD_DIR together with the database.
  */
 export function uploadDir(): string {
-  return path.resolve(process.env.UPLOAD_DIR ?? path.join(process.cwd(), ".data", "uploads"));
+  // The comment keeps the bundler from tracing the whole project for this run-time folder.
+  return path.resolve(/* turbopackIgnore: true */ process.env.UPLOAD_DIR ?? path.join(/* turbopackIgnore: true */ process.cwd(), ".data", "uploads"));
 }
 
 const SAFE_PART = /^[A-Za-z0-9-]{1,64}$/;
@@ -20,7 +21,7 @@ function filePath(organisationId: string, id: string, ext: string): string {
   if (!SAFE_PART.test(organisationId) || !SAFE_PART.test(id) || !EXTENSIONS.has(ext)) {
     throw new RangeError("storage: organisation id, file id or extension is not a safe path part");
   }
-  return path.join(uploadDir(), organisationId, `${id}.${ext}`);
+  return path.join(/* turbopackIgnore: true */ uploadDir(), organisationId, `${id}.${ext}`);
 }
 
 /** Writes a new file; never overwrites one (ids are fresh UUIDs). */
