@@ -5,6 +5,16 @@ const seated = (position: Vec3) => ({ position, posture: "seated" as const });
 const wallY0: Vec3[] = [[0, 0, 0], [4, 0, 0], [4, 0, 2.7], [0, 0, 2.7]];
 
 describe("personToRectangle: geometry handling", () => {
+  it("gives a ceiling rectangle the same factor whatever vertex it starts from or its winding", () => {
+    const ceiling: Vec3[] = [[0.5, 1, 2.7], [3.5, 1, 2.7], [3.5, 2.2, 2.7], [0.5, 2.2, 2.7]];
+    const person = seated([1.1, 0.3, 0.6]);
+    const base = personToRectangle(person, ceiling);
+    expect(base).toBeGreaterThan(0);
+    const rotated = [...ceiling.slice(1), ceiling[0]!];
+    expect(personToRectangle(person, rotated)).toBeCloseTo(base, 14);
+    expect(personToRectangle(person, [...ceiling].reverse())).toBeCloseTo(base, 14);
+  });
+
   it("gives the same factor from either side of the wall", () => {
     const front = personToRectangle(seated([1.2, 1.5, 0.6]), wallY0);
     const back = personToRectangle(seated([1.2, -1.5, 0.6]), wallY0);
