@@ -63,6 +63,7 @@ import type {
   ZoneResult,
 } from "@/lib/compute/types";
 import { buildLayoutGeometry, pointInPolygon, netAreas, validateForCompute, type RoomGeometry, type RoomSurface } from "@/lib/compute/geometry";
+import { boundsOf } from "@/lib/layout/plan-geometry";
 import type { Layout, Panel, Seat, Zone } from "@/lib/layout/schema";
 import {
   buildLouverTable,
@@ -623,16 +624,7 @@ function computeZone(zone: Zone, seats: ReadonlyArray<SeatResult>): ZoneResult {
  */
 function computeGrid(room: PreparedRoom, stepM: number, c: ScenarioConditions): HeatmapGrid {
   const outline = room.geometry.outline;
-  let minX = Infinity;
-  let minY = Infinity;
-  let maxX = -Infinity;
-  let maxY = -Infinity;
-  for (const p of outline) {
-    minX = Math.min(minX, p.x);
-    minY = Math.min(minY, p.y);
-    maxX = Math.max(maxX, p.x);
-    maxY = Math.max(maxY, p.y);
-  }
+  const { minX, minY, maxX, maxY } = boundsOf(outline);
   const cols = Math.max(1, Math.ceil((maxX - minX) / stepM - 1e-9));
   const rows = Math.max(1, Math.ceil((maxY - minY) / stepM - 1e-9));
   const originX = minX + stepM / 2;

@@ -8,7 +8,10 @@
 import type { Vec3 } from "@/lib/viewfactor";
 import type { SurfaceKind } from "@/lib/compute/types";
 import { AppError, type FieldError } from "@/lib/http/errors";
+import { distanceToSegment, pointInPolygon as pointInOutline, signedArea } from "@/lib/layout/plan-geometry";
 import type { Layout, Opening, Panel, PlanPoint, Room } from "@/lib/layout/schema";
+
+export { distanceToSegment, signedArea };
 
 /** Lengths below this are treated as zero, m. */
 export const GEOMETRY_EPS_M = 1e-6;
@@ -55,45 +58,18 @@ export interface RoomGeometry {
 // ---------------------------------------------------------------------------------------------
 // Plane polygons
 
-/** Signed area of a plan polygon (shoelace), m²: positive for counter-clockwise corners. */
-export function signedArea(outline: ReadonlyArray<PlanPoint>): number {
-  let sum = 0;
-  for (let i = 0; i < outline.length; i++) {
-    const p = outline[i]!;
-    const q = outline[(i + 1) % outline.length]!;
-    sum += p.x * q.y - q.x * p.y;
-  }
-  return sum / 2;
-}
-
 /** The outline in counter-clockwise order (a new array when reversed). */
 export function counterClockwise(outline: ReadonlyArray<PlanPoint>): PlanPoint[] {
   return signedArea(outline) < 0 ? [...outline].reverse() : [...outline];
 }
 
-/** Distance from point p to the segment a–b, m. */
-export function distanceToSegment(p: PlanPoint, a: PlanPoint, b: PlanPoint): number {
-  const dx = b.x - a.x;
-  const dy = b.y - a.y;
-  const len2 = dx * dx + dy * dy;
-  const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / len2));
-  return Math.hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy));
-}
-
 /**
- * Point in polygon by ray casting (even–odd rule); points within `toleranceM` of an edge count
- * as inside, so a seat drawn on a wall line still belongs to the room.
+ * Point in polygon (lib/layout/plan-geometry.ts) with the computation's containment tolerance:
+ * a point within `toleranceM` of an edge counts as inside, so a seat drawn on a wall line still
+ * belongs to the room.
  */
 export function pointInPolygon(p: PlanPoint, outline: ReadonlyArray<PlanPoint>, toleranceM = CONTAINMENT_TOLERANCE_M): boolean {
-  let inside = false;
-  const n = outline.length;
-  for (let i = 0, j = n - 1; i < n; j = i++) {
-    const a = outline[i]!;
-    const b = outline[j]!;
-    if (toleranceM > 0 && distanceToSegment(p, a, b) <= toleranceM) return true;
-    if (a.y > p.y !== b.y > p.y && p.x < ((b.x - a.x) * (p.y - a.y)) / (b.y - a.y) + a.x) inside = !inside;
-  }
-  return inside;
+  return pointInOutline(p, outline, toleranceM);
 }
 
 function cross(o: PlanPoint, a: PlanPoint, b: PlanPoint): number {

@@ -172,7 +172,7 @@ function resolveParams(p: Readonly<LouverTableParams>): ResolvedParams {
  * Tabulated angles: minDeg, minDeg + step, … while below maxDeg (values within 1e-9·step of
  * maxDeg are merged into it), then maxDeg.
  */
-function tableAngles(minDeg: number, maxDeg: number, stepDeg: number): number[] {
+export function tableAngles(minDeg: number, maxDeg: number, stepDeg: number): number[] {
   const out: number[] = [];
   for (let i = 0; ; i++) {
     const a = minDeg + i * stepDeg;

@@ -5,6 +5,7 @@
  * Angles follow the layout schema: degrees from +x toward +y. The canvas draws plan +y
  * downward (the screen convention), so a positive angle turns clockwise on screen.
  */
+import { boundsOf, distanceToSegment, pointInPolygon, polygonArea, signedArea, type Bounds } from "@/lib/layout/plan-geometry";
 import type { Layout, Opening, Panel, PlanPoint, Room, Seat, Zone } from "@/lib/layout/schema";
 
 export type ElementKind = "room" | "opening" | "panel" | "seat" | "zone";
@@ -26,12 +27,8 @@ export type AnyElement =
   | { kind: "seat"; element: Seat }
   | { kind: "zone"; element: Zone };
 
-export interface Bounds {
-  minX: number;
-  minY: number;
-  maxX: number;
-  maxY: number;
-}
+// The primitives live in lib/layout/plan-geometry.ts (shared with the computation).
+export { boundsOf, distanceToSegment, pointInPolygon, polygonArea, signedArea, type Bounds } from "@/lib/layout/plan-geometry";
 
 /** Radius a seat is drawn and hit with, m (about a person's shoulder half-width plus a margin). */
 export const SEAT_RADIUS_M = 0.3;
@@ -46,21 +43,6 @@ export function toRad(deg: number): number {
 
 export function distance(a: PlanPoint, b: PlanPoint): number {
   return Math.hypot(a.x - b.x, a.y - b.y);
-}
-
-/** Shoelace area, positive for counter-clockwise (in x-right, y-up axes), m². */
-export function signedArea(outline: readonly PlanPoint[]): number {
-  let sum = 0;
-  for (let i = 0; i < outline.length; i += 1) {
-    const a = outline[i]!;
-    const b = outline[(i + 1) % outline.length]!;
-    sum += a.x * b.y - b.x * a.y;
-  }
-  return sum / 2;
-}
-
-export function polygonArea(outline: readonly PlanPoint[]): number {
-  return Math.abs(signedArea(outline));
 }
 
 /** Area centroid; for a degenerate (zero-area) outline, the mean of its corners. */
@@ -80,42 +62,6 @@ export function polygonCentroid(outline: readonly PlanPoint[]): PlanPoint {
     cy += (a.y + b.y) * cross;
   }
   return { x: cx / (6 * area), y: cy / (6 * area) };
-}
-
-/** Even-odd ray casting; points on an edge count as inside. */
-export function pointInPolygon(p: PlanPoint, outline: readonly PlanPoint[]): boolean {
-  for (let i = 0; i < outline.length; i += 1) {
-    if (distanceToSegment(p, outline[i]!, outline[(i + 1) % outline.length]!) < 1e-9) return true;
-  }
-  let inside = false;
-  for (let i = 0, j = outline.length - 1; i < outline.length; j = i, i += 1) {
-    const a = outline[i]!;
-    const b = outline[j]!;
-    if (a.y > p.y !== b.y > p.y && p.x < ((b.x - a.x) * (p.y - a.y)) / (b.y - a.y) + a.x) inside = !inside;
-  }
-  return inside;
-}
-
-export function distanceToSegment(p: PlanPoint, a: PlanPoint, b: PlanPoint): number {
-  const dx = b.x - a.x;
-  const dy = b.y - a.y;
-  const lengthSq = dx * dx + dy * dy;
-  const t = lengthSq === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / lengthSq));
-  return Math.hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy));
-}
-
-export function boundsOf(points: readonly PlanPoint[]): Bounds {
-  let minX = Infinity;
-  let minY = Infinity;
-  let maxX = -Infinity;
-  let maxY = -Infinity;
-  for (const p of points) {
-    minX = Math.min(minX, p.x);
-    minY = Math.min(minY, p.y);
-    maxX = Math.max(maxX, p.x);
-    maxY = Math.max(maxY, p.y);
-  }
-  return { minX, minY, maxX, maxY };
 }
 
 export function unionBounds(list: readonly Bounds[]): Bounds | null {

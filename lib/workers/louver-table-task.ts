@@ -17,6 +17,7 @@ import {
   LOUVER_DEFAULT_MIN_DEG,
   LOUVER_DEFAULT_STEP_DEG,
   louverTableKey,
+  tableAngles,
   type LouverTable,
   type LouverTableParams,
 } from "../panels/louverTable";
@@ -42,21 +43,6 @@ export const louverTableInputSchema = z
 /** Slices a table is built in (about; more progress messages cost nothing noticeable). */
 const TARGET_SLICES = 24;
 
-/**
- * The tabulated angles as lib/panels/louverTable.ts lays them out: minDeg + i·step while below
- * maxDeg (angles within 1e-9·step of maxDeg merge into it), then maxDeg. Used only to choose
- * slice ends; every slice's own grid is checked against it before the slices are trusted.
- */
-function gridAngles(minDeg: number, maxDeg: number, stepDeg: number): number[] {
-  const out: number[] = [];
-  for (let i = 0; ; i++) {
-    const a = minDeg + i * stepDeg;
-    if (a >= maxDeg - 1e-9 * stepDeg) break;
-    out.push(a);
-  }
-  out.push(maxDeg);
-  return out;
-}
 
 function sameNumbers(a: readonly number[], b: readonly number[]): boolean {
   return a.length === b.length && a.every((x, i) => x === b[i]);
@@ -70,7 +56,7 @@ function sameNumbers(a: readonly number[], b: readonly number[]): boolean {
 export function runLouverTable(params: Readonly<LouverTableParams>, reportProgress: ReportProgress): LouverTable {
   const key = louverTableKey(params); // validates the parameters first (RangeError)
   const stepDeg = params.stepDeg ?? LOUVER_DEFAULT_STEP_DEG[params.finish];
-  const grid = gridAngles(params.minDeg ?? LOUVER_DEFAULT_MIN_DEG, params.maxDeg ?? LOUVER_DEFAULT_MAX_DEG, stepDeg);
+  const grid = tableAngles(params.minDeg ?? LOUVER_DEFAULT_MIN_DEG, params.maxDeg ?? LOUVER_DEFAULT_MAX_DEG, stepDeg);
   const total = grid.length;
   const stage = `Tabulating the ${params.finish} louver cavity, wall emissivity ${params.wallEmissivity}`;
   reportProgress({ done: 0, total, stage });
