@@ -87,6 +87,12 @@ export type InternalGainsConditions = NonNullable<ScenarioConditions["internalGa
  * per seat at 70 W sensible with no equipment or lighting gains, and water temperature drops of
  * 5 K heating / 3 K cooling (usual design drops for radiant panels).
  */
+/**
+ * Defaults of the load fields, all common practice for offices rather than values of one
+ * standard: 0.5 outdoor air changes per hour; one person per seat at 70 W sensible (seated, very
+ * light work: ASHRAE Fundamentals ch. 18 Table 1, from memory); no equipment or lighting unless
+ * entered; water temperature drops of 5 K (heating) and 3 K (cooling) for radiant panels.
+ */
 export const LOAD_DEFAULTS: Readonly<LoadFields> = {
   airChangesPerHour: 0.5,
   internalGains: { occupants: { kind: "seats" }, sensibleWPerPerson: 70, equipmentWm2: 0, lightingWm2: 0 },
