@@ -3,29 +3,24 @@
  * folder (scripts/build-workers.mjs) and the pool runs it in worker threads. Cavity tables are
  * stored in a temporary LOUVER_CACHE_DIR.
  */
-import { existsSync, mkdtempSync, readdirSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { existsSync, readdirSync } from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, test, vi } from "vitest";
 import { GET as getJobRoute } from "@/app/api/jobs/[jobId]/route";
 import { POST as cavityTableRoute } from "@/app/api/louvers/cavity-table/route";
 import { GET as listProjects } from "@/app/api/projects/route";
 import { getJob, JOB_TTL_MS, jobSettled, MAX_ACTIVE_JOBS_PER_ORGANISATION, startJob, type JobView } from "@/lib/jobs";
-import {
-  cachedLouverTable, clearLouverTableMemory, requestCavityTable, warmLouverTables,
-} from "@/lib/louvers/cavity-table-cache";
+import { cachedLouverTable, clearLouverTableMemory, requestCavityTable, warmLouverTables } from "@/lib/louvers/cavity-table-cache";
 import { buildLouverTable, type LouverTable } from "@/lib/panels/louverTable";
-import { closePool, configurePool, defaultPoolOptions, poolStats } from "@/lib/workers/pool";
+import { poolStats } from "@/lib/workers/pool";
 import { call, organisationWithEveryRole } from "../support/api";
 import { closeDatabase } from "../support/db";
-// @ts-expect-error — a plain .mjs build script without type declarations
-import { buildWorkers } from "../../scripts/build-workers.mjs";
+import { openWorkerSandbox, type WorkerSandbox } from "@/tests/support/workers";
 
 type Org = Awaited<ReturnType<typeof organisationWithEveryRole>>;
 let org: Org;
 let other: Org;
-let workDir = "";
-const previousCacheDir = process.env.LOUVER_CACHE_DIR;
+let sandbox: WorkerSandbox;
 
 /** A table slow enough (a few seconds of radiosity solves) to watch a job run. */
 const SLOW = { finish: "diffuse", wallEmissivity: 0.3, stepDeg: 1 } as const;
@@ -43,19 +38,12 @@ async function poll(token: string, jobId: string, seen: JobView[] = [], everyMs 
 }
 
 beforeAll(async () => {
-  workDir = mkdtempSync(path.join(tmpdir(), "seatwise-jobs-"));
-  process.env.LOUVER_CACHE_DIR = path.join(workDir, "louver-tables");
-  const entryPath = await buildWorkers(path.join(workDir, "workers", "entry.mjs"));
-  await configurePool({ ...defaultPoolOptions(), mode: "threads", entryPath, threads: 1 });
+  sandbox = await openWorkerSandbox("jobs", "threads");
   [org, other] = await Promise.all([organisationWithEveryRole("jobs"), organisationWithEveryRole("jobs-other")]);
 }, 60_000);
 
 afterAll(async () => {
-  await closePool();
-  await configurePool(defaultPoolOptions());
-  if (previousCacheDir === undefined) delete process.env.LOUVER_CACHE_DIR;
-  else process.env.LOUVER_CACHE_DIR = previousCacheDir;
-  rmSync(workDir, { recursive: true, force: true });
+  await sandbox.close();
   await closeDatabase();
 });
 

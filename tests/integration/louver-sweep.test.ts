@@ -5,9 +5,6 @@
  * seat of its own. The sweep must agree with the full comfort computation at the layout's own
  * setting, cover only the panel's room and answer the demo plan within the issue's budget.
  */
-import { mkdtempSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { POST as computeRoute } from "@/app/api/projects/[projectId]/compute/route";
 import { PUT as saveLayout } from "@/app/api/projects/[projectId]/layout/route";
@@ -17,13 +14,13 @@ import { POST as createProject } from "@/app/api/projects/route";
 import type { ComputeResult } from "@/lib/compute/types";
 import { demoLayout } from "@/lib/demo/layout";
 import { LAYOUT_SCHEMA_VERSION, type Layout, type Panel } from "@/lib/layout/schema";
-import { clearLouverTableMemory, storeLouverTable } from "@/lib/louvers/cavity-table-cache";
+import { storeLouverTable } from "@/lib/louvers/cavity-table-cache";
 import type { PmvSweep } from "@/lib/louvers/sweep";
 import { buildLouverTable } from "@/lib/panels/louverTable";
 import { WINTER_DESIGN } from "@/lib/scenarios/schema";
-import { closePool, configurePool, defaultPoolOptions } from "@/lib/workers/pool";
 import { call, fieldPaths, organisationWithEveryRole } from "../support/api";
 import { closeDatabase } from "../support/db";
+import { openWorkerSandbox, type WorkerSandbox } from "@/tests/support/workers";
 
 type Org = Awaited<ReturnType<typeof organisationWithEveryRole>>;
 let org: Org;
@@ -33,8 +30,7 @@ let scenarioId = "";
 let revision = 0;
 let demoProjectId = "";
 let demoScenarioId = "";
-let workDir = "";
-const previousCacheDir = process.env.LOUVER_CACHE_DIR;
+let sandbox: WorkerSandbox;
 
 const LOUVER: NonNullable<Panel["louver"]> = { openingAngleDeg: 120, minOpeningAngleDeg: 40, maxOpeningAngleDeg: 180, axisDeg: 0, finish: "diffuse", wallEmissivity: 0.9 };
 
@@ -69,11 +65,8 @@ async function sweep(body: Record<string, unknown>, token = org.facility_manager
 }
 
 beforeAll(async () => {
-  workDir = mkdtempSync(path.join(tmpdir(), "seatwise-sweep-"));
-  process.env.LOUVER_CACHE_DIR = path.join(workDir, "louver-tables");
-  clearLouverTableMemory();
+  sandbox = await openWorkerSandbox("sweep", "inline");
   await storeLouverTable(buildLouverTable({ finish: "diffuse", wallEmissivity: 0.9 }));
-  await configurePool({ ...defaultPoolOptions(), mode: "inline" });
   [org, other] = await Promise.all([organisationWithEveryRole("sweep"), organisationWithEveryRole("sweep-other")]);
   const project = await call<{ id: string }>(createProject, "POST", { token: org.designer.token, body: { name: "Sweep bay" } });
   expect(project.status).toBe(201);
@@ -94,12 +87,7 @@ beforeAll(async () => {
 }, 60_000);
 
 afterAll(async () => {
-  await closePool();
-  await configurePool(defaultPoolOptions());
-  clearLouverTableMemory();
-  if (previousCacheDir === undefined) delete process.env.LOUVER_CACHE_DIR;
-  else process.env.LOUVER_CACHE_DIR = previousCacheDir;
-  rmSync(workDir, { recursive: true, force: true });
+  await sandbox.close();
   await closeDatabase();
 });
 

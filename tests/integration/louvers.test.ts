@@ -5,9 +5,6 @@
  * into a temporary folder and run in a real worker thread; cavity tables live in a temporary
  * LOUVER_CACHE_DIR.
  */
-import { mkdtempSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { GET as getJobRoute } from "@/app/api/jobs/[jobId]/route";
 import { POST as applyRoute } from "@/app/api/projects/[projectId]/louvers/apply/route";
@@ -25,19 +22,16 @@ import { optimiseLouvers } from "@/lib/louvers/optimise";
 import type { LouverOptimiseOutput } from "@/lib/louvers/optimise-task";
 import type { LayoutAtRevision } from "@/lib/projects/service";
 import { WINTER_DESIGN } from "@/lib/scenarios/schema";
-import { closePool, configurePool, defaultPoolOptions } from "@/lib/workers/pool";
 import { call, fieldPaths, organisationWithEveryRole } from "../support/api";
 import { closeDatabase } from "../support/db";
-// @ts-expect-error — a plain .mjs build script without type declarations
-import { buildWorkers } from "../../scripts/build-workers.mjs";
+import { openWorkerSandbox, type WorkerSandbox } from "@/tests/support/workers";
 
 type Org = Awaited<ReturnType<typeof organisationWithEveryRole>>;
 let org: Org;
 let other: Org;
 let projectId = "";
 let scenarioId = "";
-let workDir = "";
-const previousCacheDir = process.env.LOUVER_CACHE_DIR;
+let sandbox: WorkerSandbox;
 
 function panel(id: string, x: number, louvered: boolean): Panel {
   return {
@@ -79,10 +73,7 @@ async function revisionCount(): Promise<number> {
 const optimise = (token: string, body: unknown = { scenarioId }, id = projectId) => call<LouverOptimiseOutput>(optimiseRoute, "POST", { token, params: { projectId: id }, body });
 
 beforeAll(async () => {
-  workDir = mkdtempSync(path.join(tmpdir(), "seatwise-louvers-"));
-  process.env.LOUVER_CACHE_DIR = path.join(workDir, "louver-tables");
-  const entryPath = await buildWorkers(path.join(workDir, "workers", "entry.mjs"));
-  await configurePool({ ...defaultPoolOptions(), mode: "threads", entryPath, threads: 1 });
+  sandbox = await openWorkerSandbox("louvers", "threads");
   [org, other] = await Promise.all([organisationWithEveryRole("louvers"), organisationWithEveryRole("louvers-other")]);
   const project = await call<{ id: string }>(createProjectRoute, "POST", { token: org.designer.token, body: { name: "Louver studio" } });
   expect(project.status).toBe(201);
@@ -95,11 +86,7 @@ beforeAll(async () => {
 }, 60_000);
 
 afterAll(async () => {
-  await closePool();
-  await configurePool(defaultPoolOptions());
-  if (previousCacheDir === undefined) delete process.env.LOUVER_CACHE_DIR;
-  else process.env.LOUVER_CACHE_DIR = previousCacheDir;
-  rmSync(workDir, { recursive: true, force: true });
+  await sandbox.close();
   await closeDatabase();
 });
 

@@ -4,9 +4,7 @@
  * wall panel, two desks and one zone with a weekday schedule. Cavity tables live in a temporary
  * LOUVER_CACHE_DIR; a table that is not there is computed by the worker pool (inline mode here).
  */
-import { existsSync, mkdtempSync, readdirSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
+import { existsSync, readdirSync } from "node:fs";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { GET as energyRoute } from "@/app/api/projects/[projectId]/energy/route";
 import { PUT as saveLayout } from "@/app/api/projects/[projectId]/layout/route";
@@ -16,14 +14,14 @@ import { POST as createScenario } from "@/app/api/projects/[projectId]/scenarios
 import { POST as createProject } from "@/app/api/projects/route";
 import { WEEKS_PER_YEAR } from "@/lib/energy";
 import { LAYOUT_SCHEMA_VERSION, type Layout, type Panel } from "@/lib/layout/schema";
-import { clearLouverTableMemory, storeLouverTable } from "@/lib/louvers/cavity-table-cache";
+import { storeLouverTable } from "@/lib/louvers/cavity-table-cache";
 import { optimiseLouvers } from "@/lib/louvers/optimise";
 import { buildLouverTable } from "@/lib/panels/louverTable";
 import type { EnergyResult, PerformanceResult, RoomLoadsResult } from "@/lib/performance/service";
 import { WINTER_DESIGN, withLoadDefaults, type ScenarioConditions } from "@/lib/scenarios/schema";
-import { closePool, configurePool, defaultPoolOptions } from "@/lib/workers/pool";
 import { call, fieldPaths, organisationWithEveryRole, type RouteHandler } from "../support/api";
 import { closeDatabase } from "../support/db";
+import { openWorkerSandbox, type WorkerSandbox } from "@/tests/support/workers";
 
 type Org = Awaited<ReturnType<typeof organisationWithEveryRole>>;
 let org: Org;
@@ -32,8 +30,7 @@ let projectId = "";
 let winterId = "";
 let oldStyleId = "";
 let revision = 0;
-let workDir = "";
-const previousCacheDir = process.env.LOUVER_CACHE_DIR;
+let sandbox: WorkerSandbox;
 
 const LOUVER: NonNullable<Panel["louver"]> = { openingAngleDeg: 150, minOpeningAngleDeg: 30, maxOpeningAngleDeg: 180, axisDeg: 0, finish: "diffuse", wallEmissivity: 0.9 };
 
@@ -91,12 +88,8 @@ async function get<T>(handler: RouteHandler, query: string, token = org.designer
 }
 
 beforeAll(async () => {
-  workDir = mkdtempSync(path.join(tmpdir(), "seatwise-perf-"));
-  process.env.LOUVER_CACHE_DIR = path.join(workDir, "louver-tables");
-  clearLouverTableMemory();
+  sandbox = await openWorkerSandbox("perf", "inline");
   await storeLouverTable(buildLouverTable({ finish: "diffuse", wallEmissivity: 0.9 }));
-  // Tables not stored yet are computed by the pool; inline here (no worker bundle needed).
-  await configurePool({ ...defaultPoolOptions(), mode: "inline" });
   [org, other] = await Promise.all([organisationWithEveryRole("perf"), organisationWithEveryRole("perf-other")]);
   const project = await call<{ id: string }>(createProject, "POST", { token: org.designer.token, body: { name: "Performance bay" } });
   expect(project.status).toBe(201);
@@ -115,12 +108,7 @@ beforeAll(async () => {
 }, 60_000);
 
 afterAll(async () => {
-  await closePool();
-  await configurePool(defaultPoolOptions());
-  clearLouverTableMemory();
-  if (previousCacheDir === undefined) delete process.env.LOUVER_CACHE_DIR;
-  else process.env.LOUVER_CACHE_DIR = previousCacheDir;
-  rmSync(workDir, { recursive: true, force: true });
+  await sandbox.close();
   await closeDatabase();
 });
 
