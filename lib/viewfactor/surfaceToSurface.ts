@@ -8,9 +8,9 @@ import type { Vec3 } from "./vec3";
 
 /** Options of {@link surfaceToSurface}. */
 export interface SurfaceToSurfaceOptions {
-  /** Local error target on F (dimensionless), > 0; default 1e-7. */
+  /** Error target on F (dimensionless, absolute), > 0; default 1e-7. */
   tolerance?: number;
-  /** Maximum number of 4-way triangle subdivisions, integer 0…16; default 12. */
+  /** Maximum depth of 4-way triangle subdivision, integer 0…16; default 12. */
   maxDepth?: number;
 }
 
@@ -19,6 +19,14 @@ const DEFAULT_MAX_DEPTH = 12;
 /** Points per direction of the collapsed-square Gauss rule on each triangle. */
 const GAUSS_ORDER = 4;
 const RULE = gaussLegendre01(GAUSS_ORDER);
+/** Longest edge² / (2·area) above which a starting triangle is bisected first (a right isosceles triangle has 2). */
+const MAX_SLENDERNESS = 2.5;
+/** Cap on the starting pieces per fan triangle (a side ratio of ~1000 needs about 2,000). */
+const MAX_PIECES = 4096;
+/** Cap on leaf splits (each costs 16 triangle rules): bounds the time of a pathological pair. */
+const MAX_SPLITS = 50_000;
+/** The summed error estimates must reach SAFETY × tolerance: near a shared edge they can undershoot the true error. */
+const SAFETY = 0.1;
 
 /** Scratch integration point (no allocation per quadrature point). */
 const point: Vec3 = [0, 0, 0];
@@ -30,23 +38,25 @@ const point: Vec3 = [0, 0, 0];
  *   F_{a→b} = (1/A_a) ∫_{A_a} F_{dA→b} dA,
  *
  * the inner factor being exact ({@link elementToPolygon}, contour integral
- * [1], [2]). The outer integral uses a fan triangulation of `a`, on each
- * triangle an n × n = 4 × 4 Gauss–Legendre product rule on the collapsed
- * square (Duffy's transformation [12]), refined adaptively by 4-way midpoint
- * subdivision until the change on a triangle is ≤ tolerance × its area
- * fraction (or maxDepth is reached). Refinement concentrates near a shared
- * edge, where F_{dA→b} is continuous but not smooth.
+ * [1], [2]). The outer integral uses a fan triangulation of `a`, slender
+ * triangles first cut by longest-edge bisection into well-shaped pieces; on
+ * each triangle an n × n = 4 × 4 Gauss–Legendre product rule on the collapsed
+ * square (Duffy's transformation [12]), compared with the same rule on its four
+ * midpoint children. The scheme is globally adaptive (as QUADPACK's [13]):
+ * the triangle with the largest estimated error is split next, until the
+ * estimates sum to ≤ 0.1 × tolerance (or maxDepth / a split budget is reached). Refinement concentrates near a shared edge or a corner of `b`
+ * touching `a`, where F_{dA→b} is continuous but not smooth.
  *
  * Accuracy (absolute, on F; measured with the defaults against the
  * catalogue closed forms [2] for side ratios 0.02…50, see
- * tests/reference/viewfactor): directly opposed parallel rectangles ≤ 1e-9
- * (worst seen 7.7e-10), perpendicular rectangles with a common edge ≤ 3e-9
- * (worst seen 2.5e-9). Guaranteed bounds stated for callers: 1e-4 (parallel)
- * and 2e-3 (common edge); the tests also guard 1e-7 for both. The target is
- * absolute: a very small F (say 1e-4) is correspondingly less accurate in
- * relative terms (≈ 1e-5 seen) — pass a smaller `tolerance` when that
- * matters. Cost: about 0.1–25 ms per pair in Node 20, growing with the side
- * ratio and near shared edges (all 3,540 pairs of a 60-panel room: ≈ 0.3 s).
+ * tests/reference/viewfactor): directly opposed parallel rectangles worst
+ * seen 7.4e-10, perpendicular rectangles with a common edge 1.1e-8, and with
+ * a partly shared edge (view-factor algebra on the common-edge form) 3e-8.
+ * Guaranteed bounds stated for callers: 1e-4 (parallel) and 2e-3 (common
+ * edge); the tests also guard 1e-7 for all three. The target is absolute: a
+ * very small F (say 1e-4) is correspondingly less accurate in relative terms
+ * — pass a smaller `tolerance` when that matters. Cost: about 1–150 ms per
+ * pair in Node 20, growing with the side ratio and near shared edges.
  *
  * Side: `a` emits from the side of its plane on which the centroid of `b`
  * lies (so the winding of `a` does not matter); if b's centroid is in a's
@@ -88,14 +98,9 @@ export function surfaceToSurface(
 
   const ctx: Context = { normal, b, tolPerArea: tolerance, maxDepth };
   const p0 = a[0] as Readonly<Vec3>;
-  let total = 0;
-  for (let i = 1; i + 1 < a.length; i++) {
-    const p1 = a[i] as Readonly<Vec3>;
-    const p2 = a[i + 1] as Readonly<Vec3>;
-    const whole = triangleIntegral(p0, p1, p2, ctx);
-    total += refine(p0, p1, p2, whole, 0, ctx);
-  }
-  const f = total / areaA;
+  const pieces: Triangle[] = [];
+  for (let i = 1; i + 1 < a.length; i++) pieces.push(...wellShaped(p0, a[i] as Readonly<Vec3>, a[i + 1] as Readonly<Vec3>));
+  const f = integrate(pieces, areaA, ctx) / areaA;
   return f < 0 ? 0 : f > 1 ? 1 : f;
 }
 
@@ -136,27 +141,151 @@ function triangleIntegral(p0: Readonly<Vec3>, p1: Readonly<Vec3>, p2: Readonly<V
   return 2 * area * sum;
 }
 
+type Triangle = [Readonly<Vec3>, Readonly<Vec3>, Readonly<Vec3>];
+
+/** Longest edge² over twice the area (dimensionless): equilateral 2/√3 ≈ 1.15, right isosceles 2, grows with slenderness. */
+function slenderness(p0: Readonly<Vec3>, p1: Readonly<Vec3>, p2: Readonly<Vec3>): number {
+  const area = triangleArea(p0, p1, p2);
+  return area === 0 ? 0 : Math.max(dist2(p0, p1), dist2(p1, p2), dist2(p2, p0)) / (2 * area);
+}
+
+function dist2(p: Readonly<Vec3>, q: Readonly<Vec3>): number {
+  return (p[0] - q[0]) ** 2 + (p[1] - q[1]) ** 2 + (p[2] - q[2]) ** 2;
+}
+
+/**
+ * Splits a slender triangle by repeated longest-edge bisection until every piece has
+ * longest edge² ≤ MAX_SLENDERNESS × 2·area. Midpoint subdivision keeps a triangle's
+ * shape, so without this a long thin strip next to a shared edge or a corner of `b`
+ * stays slender at every depth and its error estimate is too optimistic.
+ */
+function wellShaped(p0: Readonly<Vec3>, p1: Readonly<Vec3>, p2: Readonly<Vec3>): Triangle[] {
+  const out: Triangle[] = [];
+  const stack: Triangle[] = [[p0, p1, p2]];
+  while (stack.length > 0) {
+    const [a, b, c] = stack.pop() as Triangle;
+    if (slenderness(a, b, c) <= MAX_SLENDERNESS || out.length + stack.length > MAX_PIECES) {
+      out.push([a, b, c]);
+      continue;
+    }
+    const ab = dist2(a, b);
+    const bc = dist2(b, c);
+    const ca = dist2(c, a);
+    if (ab >= bc && ab >= ca) {
+      const m = mid(a, b);
+      stack.push([a, m, c], [m, b, c]);
+    } else if (bc >= ca) {
+      const m = mid(b, c);
+      stack.push([b, m, a], [m, c, a]);
+    } else {
+      const m = mid(c, a);
+      stack.push([c, m, b], [m, a, b]);
+    }
+  }
+  return out;
+}
+
 function mid(p: Readonly<Vec3>, q: Readonly<Vec3>): Vec3 {
   return [0.5 * (p[0] + q[0]), 0.5 * (p[1] + q[1]), 0.5 * (p[2] + q[2])];
 }
 
-/** Adaptive 4-way subdivision: accept the children's sum when it changes the parent's estimate by ≤ tol × area. */
-function refine(p0: Readonly<Vec3>, p1: Readonly<Vec3>, p2: Readonly<Vec3>, whole: number, depth: number, ctx: Context): number {
+/** One leaf of the adaptive scheme: a triangle, its refined integral and that value's error estimate. */
+interface Leaf {
+  t: Triangle;
+  /** The four children's integrals (m²): the leaf's value is their sum. */
+  kids: [number, number, number, number];
+  /** |Σ children − whole| (m²), the error estimate of the coarser rule; an upper estimate for the children's sum. */
+  error: number;
+  depth: number;
+}
+
+function children(t: Triangle): [Triangle, Triangle, Triangle, Triangle] {
+  const [p0, p1, p2] = t;
   const m01 = mid(p0, p1);
   const m12 = mid(p1, p2);
   const m20 = mid(p2, p0);
-  const q0 = triangleIntegral(p0, m01, m20, ctx);
-  const q1 = triangleIntegral(m01, p1, m12, ctx);
-  const q2 = triangleIntegral(m20, m12, p2, ctx);
-  const q3 = triangleIntegral(m01, m12, m20, ctx);
-  const children = q0 + q1 + q2 + q3;
-  if (depth >= ctx.maxDepth || Math.abs(children - whole) <= ctx.tolPerArea * triangleArea(p0, p1, p2)) {
-    return children;
+  return [[p0, m01, m20], [m01, p1, m12], [m20, m12, p2], [m01, m12, m20]];
+}
+
+function makeLeaf(t: Triangle, whole: number, depth: number, ctx: Context): Leaf {
+  const kids = children(t).map((c) => triangleIntegral(c[0], c[1], c[2], ctx)) as Leaf["kids"];
+  return { t, kids, error: Math.abs(kids[0] + kids[1] + kids[2] + kids[3] - whole), depth };
+}
+
+/**
+ * Globally adaptive 4-way subdivision: keeps splitting the leaf with the largest error
+ * estimate until the estimates sum to ≤ tolerance × A_a (the target on F), every leaf
+ * left is at maxDepth, or MAX_SPLITS is spent. Unlike a per-triangle test, this lets the
+ * few triangles along a shared edge (where F_dA→b is continuous but not smooth) carry
+ * their share of the error instead of all being driven to maxDepth.
+ */
+function integrate(pieces: Triangle[], areaA: number, ctx: Context): number {
+  const heap = new MaxHeap<Leaf>((x, y) => x.error - y.error);
+  let errorSum = 0;
+  for (const t of pieces) {
+    const leaf = makeLeaf(t, triangleIntegral(t[0], t[1], t[2], ctx), 0, ctx);
+    heap.push(leaf);
+    errorSum += leaf.error;
   }
-  return (
-    refine(p0, m01, m20, q0, depth + 1, ctx) +
-    refine(m01, p1, m12, q1, depth + 1, ctx) +
-    refine(m20, m12, p2, q2, depth + 1, ctx) +
-    refine(m01, m12, m20, q3, depth + 1, ctx)
-  );
+  const target = SAFETY * ctx.tolPerArea * areaA;
+  const done: Leaf[] = [];
+  for (let splits = 0; splits < MAX_SPLITS && errorSum > target && heap.size > 0; splits++) {
+    const leaf = heap.pop() as Leaf;
+    if (leaf.depth >= ctx.maxDepth) {
+      done.push(leaf);
+      continue;
+    }
+    errorSum -= leaf.error;
+    children(leaf.t).forEach((c, k) => {
+      const child = makeLeaf(c, leaf.kids[k] as number, leaf.depth + 1, ctx);
+      heap.push(child);
+      errorSum += child.error;
+    });
+  }
+  let total = 0;
+  for (const leaf of [...done, ...heap.items()]) total += leaf.kids[0] + leaf.kids[1] + leaf.kids[2] + leaf.kids[3];
+  return total;
+}
+
+/** A binary max-heap (the largest by `compare` on top). */
+class MaxHeap<T> {
+  private readonly data: T[] = [];
+  constructor(private readonly compare: (x: T, y: T) => number) {}
+  get size(): number {
+    return this.data.length;
+  }
+  items(): readonly T[] {
+    return this.data;
+  }
+  push(item: T): void {
+    const d = this.data;
+    d.push(item);
+    let i = d.length - 1;
+    while (i > 0) {
+      const parent = (i - 1) >> 1;
+      if (this.compare(d[i] as T, d[parent] as T) <= 0) break;
+      [d[i], d[parent]] = [d[parent] as T, d[i] as T];
+      i = parent;
+    }
+  }
+  pop(): T | undefined {
+    const d = this.data;
+    const top = d[0];
+    const last = d.pop();
+    if (d.length > 0 && last !== undefined) {
+      d[0] = last;
+      let i = 0;
+      for (;;) {
+        const l = 2 * i + 1;
+        const r = l + 1;
+        let m = i;
+        if (l < d.length && this.compare(d[l] as T, d[m] as T) > 0) m = l;
+        if (r < d.length && this.compare(d[r] as T, d[m] as T) > 0) m = r;
+        if (m === i) break;
+        [d[i], d[m]] = [d[m] as T, d[i] as T];
+        i = m;
+      }
+    }
+    return top;
+  }
 }

@@ -10,6 +10,7 @@ import {
   elementPerpendicularCorner,
   parallelRectangles,
   perpendicularCommonEdge,
+  perpendicularPartEdge,
   sphereRectangleCorner,
 } from "./catalogueFormulas";
 
@@ -159,6 +160,36 @@ describe("surfaceToSurface vs the catalogue: perpendicular rectangles with a com
         const err = Math.abs(surfaceToSurface(floor, wall) - perpendicularCommonEdge(l, w, h));
         expect(err).toBeLessThanOrEqual(PERPENDICULAR_TOLERANCE);
         expect(err).toBeLessThanOrEqual(MEASURED_TOLERANCE);
+      });
+    }
+  }
+});
+
+describe("surfaceToSurface vs the catalogue: perpendicular rectangles sharing part of an edge (view-factor algebra)", () => {
+  /** Emitter l × w, receiver s × h on the first s of the emitter's far edge y = w (m). The first row once broke the 1e-7 guard. */
+  const rows: ReadonlyArray<readonly [number, number, number, number]> = [
+    [0.1403011650968945, 0.1, 1.1100996425255676, 0.4432727117432584],
+    [2, 1, 1, 1],
+    [3, 0.5, 2, 1],
+    [0.2, 0.1, 3, 3],
+    [5, 0.1, 0.4, 2.5],
+  ];
+  it("the algebra reduces to the common-edge form when the receiver spans the whole edge", () => {
+    expect(Math.abs(perpendicularPartEdge(2, 2 - 1e-12, 1, 1) - perpendicularCommonEdge(2, 1, 1))).toBeLessThan(1e-9);
+  });
+  for (const [name, move] of MOTIONS) {
+    for (const [l, s, w, h] of rows) {
+      it(`is within the stated 2e-3 (and the measured 1e-7) both ways for l=${l}, s=${s}, w=${w}, h=${h} (${name})`, () => {
+        const floor = ([[0, 0, 0], [l, 0, 0], [l, w, 0], [0, w, 0]] as Vec3[]).map(move);
+        const wall = ([[0, w, 0], [s, w, 0], [s, w, h], [0, w, h]] as Vec3[]).map(move);
+        const expected = perpendicularPartEdge(l, s, w, h);
+        const forward = Math.abs(surfaceToSurface(floor, wall) - expected);
+        // Reciprocity gives the reverse factor: F(R→A) = A·F(A→R) / R.
+        const backward = Math.abs(surfaceToSurface(wall, floor) - (expected * l * w) / (s * h));
+        for (const err of [forward, backward]) {
+          expect(err).toBeLessThanOrEqual(PERPENDICULAR_TOLERANCE);
+          expect(err).toBeLessThanOrEqual(MEASURED_TOLERANCE);
+        }
       });
     }
   }

@@ -85,3 +85,17 @@ export function perpendicularCommonEdge(l: number, w: number, h: number): number
     );
   return (t1 + t2) / (Math.PI * W);
 }
+
+/**
+ * Perpendicular rectangles sharing only part of an edge: the emitter spans
+ * 0…l along the edge (width w), the receiver 0…s with s < l (height h).
+ * View-factor algebra (decomposition and reciprocity, e.g. Howell's
+ * catalogue introduction; common practice) on the common-edge form: with the
+ * emitter split into A1 (0…s) and A2 (s…l) and the receiver extended by R2
+ * (s…l), A2·F(A2→R1) = A1·F(A1→R2) by symmetry, so
+ *   A·F(A→R1) = ½ [A·F(A→R1+R2) + A1·F(A1→R1) − A2·F(A2→R2)].
+ */
+export function perpendicularPartEdge(l: number, s: number, w: number, h: number): number {
+  const [A, A1, A2] = [l * w, s * w, (l - s) * w];
+  return (A * perpendicularCommonEdge(l, w, h) + A1 * perpendicularCommonEdge(s, w, h) - A2 * perpendicularCommonEdge(l - s, w, h)) / (2 * A);
+}
