@@ -19,6 +19,8 @@ export default defineConfig({
   test: {
     include: ["tests/unit/**/*.test.ts", "tests/reference/**/*.test.ts"],
     environment: "node",
+    // fast-check properties run from a fixed seed (SEATWISE_FC_SEED overrides).
+    setupFiles: ["tests/support/fast-check.ts"],
     // Some reference tables trace many rays; generous so a loaded CI machine does not time out.
     testTimeout: 30_000,
   },
