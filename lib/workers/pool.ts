@@ -37,7 +37,7 @@ export interface PoolOptions {
   entryPath: string;
   /** Runs waiting for a thread beyond which `runTask` refuses new work (PoolBusyError). */
   maxQueued: number;
-  /** A run longer than this is stopped (its thread is replaced) and fails with RunTimeoutError, ms. */
+  /** A run longer than this (counted from its thread being up) is stopped, its thread replaced, and it fails with RunTimeoutError, ms. */
   timeoutMs: number;
 }
 
@@ -110,6 +110,8 @@ interface Slot {
   worker: Worker;
   current: Pending | null;
   timer: NodeJS.Timeout | null;
+  /** The thread has started; a run's time limit counts from then, not from the spawn. */
+  online: boolean;
 }
 
 class ThreadPool {
@@ -154,7 +156,11 @@ class ThreadPool {
 
   private spawn(): Slot {
     const worker = new Worker(this.options.entryPath, { name: "seatwise-compute" });
-    const slot: Slot = { worker, current: null, timer: null };
+    const slot: Slot = { worker, current: null, timer: null, online: false };
+    worker.once("online", () => {
+      slot.online = true;
+      if (slot.current) this.startTimer(slot, slot.current);
+    });
     worker.on("message", (reply: WorkerReply) => this.onReply(slot, reply));
     // An uncaught error kills the thread: fail its run, forget the thread, carry on with a new one.
     worker.on("error", (error) => void this.retire(slot, error));
@@ -167,11 +173,16 @@ class ThreadPool {
   private assign(slot: Slot, pending: Pending): void {
     slot.current = pending;
     slot.worker.ref(); // a running task does
-    slot.timer = setTimeout(() => void this.retire(slot, new RunTimeoutError(pending.task, this.options.timeoutMs)), this.options.timeoutMs);
-    slot.timer.unref();
+    if (slot.online) this.startTimer(slot, pending);
     pending.options.onStart?.();
     const request: WorkerRequest = { type: "run", runId: pending.runId, task: pending.task, input: pending.input };
     slot.worker.postMessage(request);
+  }
+
+  /** Starts the run's time limit (once its thread is online). */
+  private startTimer(slot: Slot, pending: Pending): void {
+    slot.timer = setTimeout(() => void this.retire(slot, new RunTimeoutError(pending.task, this.options.timeoutMs)), this.options.timeoutMs);
+    slot.timer.unref();
   }
 
   private onReply(slot: Slot, reply: WorkerReply): void {

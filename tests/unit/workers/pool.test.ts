@@ -74,7 +74,8 @@ describe("runTask in threads mode (a stand-in worker entry)", () => {
   });
 
   test("stops a run that exceeds the time limit", async () => {
-    await configurePool({ mode: "threads", entryPath: FIXTURE, threads: 1, timeoutMs: 200 });
+    // 1 s, counted once the thread is up: the stand-in answers at once, so only the silent run (seed 3) reaches it, even on a loaded machine.
+    await configurePool({ mode: "threads", entryPath: FIXTURE, threads: 1, timeoutMs: 1_000 });
     await expect(runTask("groove.trace", trace(3))).rejects.toBeInstanceOf(RunTimeoutError);
     await expect(runTask("groove.trace", trace(1))).resolves.toEqual({ echoed: 45 });
   });
