@@ -10,7 +10,7 @@ import {
 const RESULTS = path.join(DATA_DIR, "test-results");
 const APP_PORT = Number(process.env.SEATWISE_TEST_PORT ?? 3100);
 const bin = (name) => path.join(ROOT, "node_modules/.bin", name);
-const tally = { passed: 0, failed: 0, lines: [] };
+const tally = { passed: 0, failed: 0, lines: [], failures: [] };
 
 function record(name, passed, failed) {
   tally.passed += passed;
@@ -44,6 +44,17 @@ function vitest(name, config, env) {
     return;
   }
   record(name, report.numPassedTests, failed);
+  // Name each failure again in the summary, so the end of a long CI log says what broke.
+  for (const file of report.testResults ?? []) {
+    const where = path.relative(ROOT, file.name);
+    const failedTests = (file.assertionResults ?? []).filter((a) => a.status === "failed");
+    if (file.status === "failed" && failedTests.length === 0) tally.failures.push(`${where}: ${firstLine(file.message) || "failed to load"}`);
+    for (const a of failedTests) tally.failures.push(`${where} › ${a.fullName ?? a.title}: ${firstLine(a.failureMessages?.[0])}`);
+  }
+}
+
+function firstLine(text) {
+  return String(text ?? "").split("\n").find((line) => line.trim() !== "")?.trim().slice(0, 300) ?? "";
 }
 
 async function waitForHealth(url) {
@@ -112,6 +123,7 @@ async function browserTests(env) {
 }
 
 function finish() {
+  if (tally.failures.length > 0) console.log("\nFailed tests:\n" + tally.failures.map((f) => `  ${f}`).join("\n"));
   console.log("\n" + tally.lines.join("\n"));
   console.log(`${tally.passed} passed, ${tally.failed} failed`);
   process.exit(tally.failed === 0 && tally.passed > 0 ? 0 : 1);
