@@ -3,6 +3,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { projectKeys, restoreRevision, revisionsQuery, type LayoutAtRevision } from "@/components/projects/queries";
 import { apiErrorMessage } from "@/components/ui/api-errors";
+import { DateTime } from "@/components/ui/date-time";
 
 interface Props {
   projectId: string;
@@ -41,7 +42,7 @@ export function RevisionsPanel({ projectId, baseRevision, dirty, readOnly, onRes
                 {r.message}
               </p>
               <p className="text-xs text-muted">
-                {r.authorName ?? "Unknown"} · {new Date(r.createdAt).toLocaleString()}
+                {r.authorName ?? "Unknown"} · <DateTime iso={r.createdAt} />
               </p>
             </div>
             {readOnly || r.number === baseRevision ? null : (
