@@ -1,14 +1,17 @@
 /**
  * Automatic louver settings on the demo plan (lib/demo/layout: 48 seats, 11 louvered panels in
  * 2 rooms) under the winter design: problem set-up (view factors, candidate outputs), search
- * per room, and the whole call. The budget is 2 s per optimisation. Prints figures; asserts
- * nothing.
+ * per room, and the whole call. The budget is 2 s per optimisation. Then the PMV sweep of one
+ * panel over its whole louver range (the chart of PMV per seat against opening angle; budget
+ * 2 s). Prints figures; asserts nothing.
  *
  * Run: npx tsx bench/optimise.bench.ts
  */
 import { louverTableFor } from "../lib/compute/comfort";
 import { demoLayout } from "../lib/demo/layout";
 import { buildLouverProblem, optimiseLouvers, solveLouverProblem } from "../lib/louvers/optimise";
+import { sweepPanelPmv } from "../lib/louvers/sweep";
+import { louverSettingsDeg } from "../lib/performance/panel-curves";
 import type { LouverTable } from "../lib/panels";
 import { SUMMER_DESIGN, WINTER_DESIGN } from "../lib/scenarios/schema";
 import { median, timeSamples } from "./support";
@@ -50,4 +53,13 @@ for (const [name, scenario, plan] of [["winter", WINTER_DESIGN, layout], ["summe
   const inAfter = r.seats.filter((s) => s.inTarget).length;
   console.log(`    seats in target ${inBefore} → ${inAfter} of ${r.seats.length}; output ${r.totalOutputBeforeW.toFixed(0)} W → ${r.totalOutputW.toFixed(0)} W; ${r.unreachable.length} unreachable`);
   console.log(`    search ${(whole / total * 100).toFixed(0)} % of the call; budget ${BUDGET_MS} ms → ${((total / BUDGET_MS) * 100).toFixed(0)} % of it`);
+}
+
+// The PMV sweep behind the chart of PMV per seat against opening angle: the demo's first window
+// panel over its whole range in the default steps.
+const swept = layout.panels.find((p) => p.id === "panel-oo-1");
+if (swept?.louver) {
+  const angles = louverSettingsDeg(swept.louver.minOpeningAngleDeg, swept.louver.maxOpeningAngleDeg);
+  const ms = time(`PMV sweep of ${swept.label}: ${angles.length} angles`, () => sweepPanelPmv(layout, WINTER_DESIGN.conditions, swept.id, angles, louverTables));
+  console.log(`    budget ${BUDGET_MS} ms → ${((ms / BUDGET_MS) * 100).toFixed(0)} % of it`);
 }

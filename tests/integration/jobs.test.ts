@@ -50,28 +50,26 @@ afterAll(async () => {
 describe("POST /api/louvers/cavity-table → GET /api/jobs/{id}", () => {
   let jobId = "";
   let views: JobView[] = [];
-  let loopLagMs = 0;
+  let loopTurns = 0;
   let requestWhileRunning: { status: number; jobStatus: string } | null = null;
 
   test("a table not computed before answers 202 with a job id at once", async () => {
-    const started = performance.now();
     const reply = await call<{ jobId: string }>(cavityTableRoute, "POST", { token: org.designer.token, body: SLOW });
     expect(reply.status, JSON.stringify(reply.body)).toBe(202);
     expect(reply.body.jobId).toMatch(/^[0-9a-f-]{36}$/);
     expect(reply.response.headers.get("location")).toBe(`/api/jobs/${reply.body.jobId}`);
-    // Answered without waiting for the table (which takes seconds): generous bound, not a target.
-    expect(performance.now() - started).toBeLessThan(1_000);
+    // Answered without waiting for the table: when the reply is in, the job has not finished.
+    expect(getJob(org.designer, reply.body.jobId).status).toMatch(/^(queued|running)$/);
     jobId = reply.body.jobId;
   });
 
   test("while the job runs, the event loop stays responsive and other requests complete", async () => {
-    // setTimeout(0) lag, sampled until the job ends. A blocked loop would show seconds.
+    // Turns of the event loop (a 5 ms timer each) counted until the job ends. Were the table
+    // computed on this thread, the loop would not turn at all while it ran.
     const sampling = (async () => {
       while (getJob(org.designer, jobId).status !== "done" && getJob(org.designer, jobId).status !== "failed") {
-        const t = performance.now();
-        await new Promise((resolve) => setTimeout(resolve, 0));
-        loopLagMs = Math.max(loopLagMs, performance.now() - t);
         await sleep(5);
+        loopTurns += 1;
       }
     })();
     // A cheap request of another organisation, made while the table is being computed.
@@ -81,7 +79,7 @@ describe("POST /api/louvers/cavity-table → GET /api/jobs/{id}", () => {
     views = await poll(org.designer.token, jobId);
     await sampling;
     expect(requestWhileRunning).toEqual({ status: 200, jobStatus: "running" });
-    expect(loopLagMs).toBeLessThan(250);
+    expect(loopTurns).toBeGreaterThan(10);
   }, 60_000);
 
   test("progress only grows, through queued/running, and the job ends done", () => {

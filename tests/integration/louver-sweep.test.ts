@@ -154,14 +154,12 @@ describe("POST /api/projects/{id}/louvers/sweep", () => {
     expect((await sweep({ scenarioId, panelId: "lv" }, org.occupant.token)).status).toBe(403);
   });
 
-  test("the demo plan's window panel over its whole range answers in under 2 s", async () => {
-    await sweep({ scenarioId: demoScenarioId, panelId: "panel-oo-1", anglesDeg: [180] }, org.designer.token, demoProjectId); // warm the module
-    const started = performance.now();
+  // Its time is a benchmark figure (bench/optimise.bench.ts), not an assertion here.
+  test("the demo plan's window panel: the whole range in 5° steps for each of the room's 40 seats", async () => {
     const reply = await sweep({ scenarioId: demoScenarioId, panelId: "panel-oo-1" }, org.designer.token, demoProjectId);
-    const ms = performance.now() - started;
     expect(reply.status).toBe(200);
     expect(reply.body.anglesDeg).toHaveLength(31);
     expect(reply.body.seats).toHaveLength(40);
-    expect(ms).toBeLessThan(2000);
+    for (const seat of reply.body.seats) expect(seat.pmv).toHaveLength(31);
   });
 });
