@@ -8,13 +8,13 @@ import type { Vec3 } from "./vec3";
 
 /** Options of {@link surfaceToSurface}. */
 export interface SurfaceToSurfaceOptions {
-  /** Error target on F (dimensionless, absolute), > 0; default 1e-7. */
+  /** Error target on F (dimensionless, absolute), > 0; default 1e-9. */
   tolerance?: number;
   /** Maximum depth of 4-way triangle subdivision, integer 0…16; default 12. */
   maxDepth?: number;
 }
 
-const DEFAULT_TOLERANCE = 1e-7;
+const DEFAULT_TOLERANCE = 1e-8;
 const DEFAULT_MAX_DEPTH = 12;
 /** Points per direction of the collapsed-square Gauss rule on each triangle. */
 const GAUSS_ORDER = 4;
@@ -50,13 +50,15 @@ const point: Vec3 = [0, 0, 0];
  * Accuracy (absolute, on F; measured with the defaults against the
  * catalogue closed forms [2] for side ratios 0.02…50, see
  * tests/reference/viewfactor): directly opposed parallel rectangles worst
- * seen 7.4e-10, perpendicular rectangles with a common edge 1.1e-8, and with
- * a partly shared edge (view-factor algebra on the common-edge form) 3e-8.
- * Guaranteed bounds stated for callers: 1e-4 (parallel) and 2e-3 (common
- * edge); the tests also guard 1e-7 for all three. The target is absolute: a
- * very small F (say 1e-4) is correspondingly less accurate in relative terms
- * — pass a smaller `tolerance` when that matters. Cost: about 1–150 ms per
- * pair in Node 20, growing with the side ratio and near shared edges.
+ * seen 2.8e-11, perpendicular rectangles with a common edge 5.7e-11; a
+ * corner of `b` on an edge of `a` is the hardest case (perpendicular
+ * rectangles sharing part of an edge, by view-factor algebra on the
+ * common-edge form: 7.1e-9). Stated for callers and guarded by the tests:
+ * 1e-9 for the catalogue configurations, 1e-7 in general. The target is
+ * absolute: a very small F (say 1e-4) is correspondingly less accurate in
+ * relative terms — pass a smaller `tolerance` when that matters. Cost: about
+ * 1–250 ms per pair in Node 20, growing with the side ratio and near shared
+ * edges and corners.
  *
  * Side: `a` emits from the side of its plane on which the centroid of `b`
  * lies (so the winding of `a` does not matter); if b's centroid is in a's
