@@ -8,7 +8,7 @@ import type { Vec3 } from "./vec3";
 
 /** Options of {@link surfaceToSurface}. */
 export interface SurfaceToSurfaceOptions {
-  /** Error target on F (dimensionless, absolute), > 0; default 1e-9. */
+  /** Error target on F (dimensionless, absolute), > 0; default 1e-8. */
   tolerance?: number;
   /** Maximum depth of 4-way triangle subdivision, integer 0…16; default 12. */
   maxDepth?: number;
@@ -44,7 +44,8 @@ const point: Vec3 = [0, 0, 0];
  * square (Duffy's transformation [12]), compared with the same rule on its four
  * midpoint children. The scheme is globally adaptive (as QUADPACK's [13]):
  * the triangle with the largest estimated error is split next, until the
- * estimates sum to ≤ 0.1 × tolerance (or maxDepth / a split budget is reached). Refinement concentrates near a shared edge or a corner of `b`
+ * estimates sum to ≤ 0.1 × tolerance (or maxDepth / a split budget is
+ * reached). Refinement concentrates near a shared edge or a corner of `b`
  * touching `a`, where F_{dA→b} is continuous but not smooth.
  *
  * Accuracy (absolute, on F; measured with the defaults against the
@@ -98,7 +99,7 @@ export function surfaceToSurface(
   const v = polygonVectorArea2(a);
   const areaA = 0.5 * Math.hypot(v[0], v[1], v[2]);
 
-  const ctx: Context = { normal, b, tolPerArea: tolerance, maxDepth };
+  const ctx: Context = { normal, b, tolerance, maxDepth };
   const p0 = a[0] as Readonly<Vec3>;
   const pieces: Triangle[] = [];
   for (let i = 1; i + 1 < a.length; i++) pieces.push(...wellShaped(p0, a[i] as Readonly<Vec3>, a[i + 1] as Readonly<Vec3>));
@@ -109,7 +110,8 @@ export function surfaceToSurface(
 interface Context {
   normal: Vec3;
   b: ReadonlyArray<Readonly<Vec3>>;
-  tolPerArea: number;
+  /** Error target on F (dimensionless). */
+  tolerance: number;
   maxDepth: number;
 }
 
@@ -216,7 +218,7 @@ function makeLeaf(t: Triangle, whole: number, depth: number, ctx: Context): Leaf
 
 /**
  * Globally adaptive 4-way subdivision: keeps splitting the leaf with the largest error
- * estimate until the estimates sum to ≤ tolerance × A_a (the target on F), every leaf
+ * estimate until the estimates sum to ≤ SAFETY × tolerance × A_a (m²), every leaf
  * left is at maxDepth, or MAX_SPLITS is spent. Unlike a per-triangle test, this lets the
  * few triangles along a shared edge (where F_dA→b is continuous but not smooth) carry
  * their share of the error instead of all being driven to maxDepth.
@@ -229,7 +231,7 @@ function integrate(pieces: Triangle[], areaA: number, ctx: Context): number {
     heap.push(leaf);
     errorSum += leaf.error;
   }
-  const target = SAFETY * ctx.tolPerArea * areaA;
+  const target = SAFETY * ctx.tolerance * areaA;
   const done: Leaf[] = [];
   for (let splits = 0; splits < MAX_SPLITS && errorSum > target && heap.size > 0; splits++) {
     const leaf = heap.pop() as Leaf;
