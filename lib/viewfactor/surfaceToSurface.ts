@@ -218,8 +218,8 @@ function makeLeaf(t: Triangle, whole: number, depth: number, ctx: Context): Leaf
 
 /**
  * Globally adaptive 4-way subdivision: keeps splitting the leaf with the largest error
- * estimate until the estimates sum to ≤ SAFETY × tolerance × A_a (m²), every leaf
- * left is at maxDepth, or MAX_SPLITS is spent. Unlike a per-triangle test, this lets the
+ * estimate until the estimates of the leaves still refinable sum to ≤ SAFETY × tolerance
+ * × A_a (m²), or MAX_SPLITS is spent. Unlike a per-triangle test, this lets the
  * few triangles along a shared edge (where F_dA→b is continuous but not smooth) carry
  * their share of the error instead of all being driven to maxDepth.
  */
@@ -235,11 +235,11 @@ function integrate(pieces: Triangle[], areaA: number, ctx: Context): number {
   const done: Leaf[] = [];
   for (let splits = 0; splits < MAX_SPLITS && errorSum > target && heap.size > 0; splits++) {
     const leaf = heap.pop() as Leaf;
+    errorSum -= leaf.error;
     if (leaf.depth >= ctx.maxDepth) {
-      done.push(leaf);
+      done.push(leaf); // cannot be refined further: its error no longer steers the loop
       continue;
     }
-    errorSum -= leaf.error;
     children(leaf.t).forEach((c, k) => {
       const child = makeLeaf(c, leaf.kids[k] as number, leaf.depth + 1, ctx);
       heap.push(child);
