@@ -37,7 +37,7 @@ import {
   lambertBinShares,
 } from "./groove-bins";
 import { solveDenseInPlace } from "./groove-linsolve";
-import { gaussLegendre } from "./groove-quadrature";
+import { gaussLegendre } from "./gaussLegendre";
 
 /** Input of the diffuse V-groove radiosity solver. */
 export interface GrooveRadiosityInput {

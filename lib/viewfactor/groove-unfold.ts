@@ -36,7 +36,7 @@ import {
   halfAngleSinCos,
   lambertBinShares,
 } from "./groove-bins";
-import { gaussLegendre } from "./groove-quadrature";
+import { gaussLegendre } from "./gaussLegendre";
 
 /** Input of the specular V-groove unfolding construction. */
 export interface GrooveUnfoldInput {

@@ -70,6 +70,20 @@ export function polygonArea(polygon: ReadonlyArray<Readonly<Vec3>>): number {
 }
 
 /**
+ * Area of the triangle p0 p1 p2 (m²), half the length of the cross product of two edges.
+ * No checks and no allocation: for inner loops (the caller validates the points).
+ */
+export function triangleArea(p0: Readonly<Vec3>, p1: Readonly<Vec3>, p2: Readonly<Vec3>): number {
+  const ux = p1[0] - p0[0];
+  const uy = p1[1] - p0[1];
+  const uz = p1[2] - p0[2];
+  const vx = p2[0] - p0[0];
+  const vy = p2[1] - p0[1];
+  const vz = p2[2] - p0[2];
+  return 0.5 * Math.hypot(uy * vz - uz * vy, uz * vx - ux * vz, ux * vy - uy * vx);
+}
+
+/**
  * Unit normal of a planar polygon by Newell's method [8]; it points to the
  * side from which the vertices are seen counter-clockwise (right-hand rule).
  * @param polygon planar polygon, ≥ 3 finite vertices (m).

@@ -3,8 +3,8 @@
  */
 import { elementToPolygon } from "./elementToPolygon";
 import { gaussLegendre01 } from "./gaussLegendre";
-import { assertPolygon, polygonCentroid, polygonNormal, polygonVectorArea2 } from "./polygon";
-import type { Vec3 } from "./vec3";
+import { assertPolygon, polygonArea, polygonCentroid, polygonNormal, triangleArea } from "./polygon";
+import { distanceVec3, type Vec3 } from "./vec3";
 
 /** Options of {@link surfaceToSurface}. */
 export interface SurfaceToSurfaceOptions {
@@ -96,8 +96,7 @@ export function surfaceToSurface(
     normal[1] = -normal[1];
     normal[2] = -normal[2];
   }
-  const v = polygonVectorArea2(a);
-  const areaA = 0.5 * Math.hypot(v[0], v[1], v[2]);
+  const areaA = polygonArea(a);
 
   const ctx: Context = { normal, b, tolerance, maxDepth };
   const p0 = a[0] as Readonly<Vec3>;
@@ -113,16 +112,6 @@ interface Context {
   /** Error target on F (dimensionless). */
   tolerance: number;
   maxDepth: number;
-}
-
-function triangleArea(p0: Readonly<Vec3>, p1: Readonly<Vec3>, p2: Readonly<Vec3>): number {
-  const ux = p1[0] - p0[0];
-  const uy = p1[1] - p0[1];
-  const uz = p1[2] - p0[2];
-  const vx = p2[0] - p0[0];
-  const vy = p2[1] - p0[1];
-  const vz = p2[2] - p0[2];
-  return 0.5 * Math.hypot(uy * vz - uz * vy, uz * vx - ux * vz, ux * vy - uy * vx);
 }
 
 /** ∫ F_{dA→b} dA over one triangle (m²): Gauss product rule on the collapsed square x = p0 + u(p1 − p0) + uv(p2 − p1), dA = 2·Area·u du dv [12]. */
@@ -150,11 +139,7 @@ type Triangle = [Readonly<Vec3>, Readonly<Vec3>, Readonly<Vec3>];
 /** Longest edge² over twice the area (dimensionless): equilateral 2/√3 ≈ 1.15, right isosceles 2, grows with slenderness. */
 function slenderness(p0: Readonly<Vec3>, p1: Readonly<Vec3>, p2: Readonly<Vec3>): number {
   const area = triangleArea(p0, p1, p2);
-  return area === 0 ? 0 : Math.max(dist2(p0, p1), dist2(p1, p2), dist2(p2, p0)) / (2 * area);
-}
-
-function dist2(p: Readonly<Vec3>, q: Readonly<Vec3>): number {
-  return (p[0] - q[0]) ** 2 + (p[1] - q[1]) ** 2 + (p[2] - q[2]) ** 2;
+  return area === 0 ? 0 : Math.max(distanceVec3(p0, p1) ** 2, distanceVec3(p1, p2) ** 2, distanceVec3(p2, p0) ** 2) / (2 * area);
 }
 
 /**
@@ -172,9 +157,9 @@ function wellShaped(p0: Readonly<Vec3>, p1: Readonly<Vec3>, p2: Readonly<Vec3>):
       out.push([a, b, c]);
       continue;
     }
-    const ab = dist2(a, b);
-    const bc = dist2(b, c);
-    const ca = dist2(c, a);
+    const ab = distanceVec3(a, b) ** 2;
+    const bc = distanceVec3(b, c) ** 2;
+    const ca = distanceVec3(c, a) ** 2;
     if (ab >= bc && ab >= ca) {
       const m = mid(a, b);
       stack.push([a, m, c], [m, b, c]);

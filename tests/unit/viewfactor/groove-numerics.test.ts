@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { createRng, splitMix64, Xoshiro128StarStar } from "@/lib/viewfactor/rng";
-import { gaussLegendre } from "@/lib/viewfactor/groove-quadrature";
+import { gaussLegendre } from "@/lib/viewfactor/gaussLegendre";
 import { solveDenseInPlace } from "@/lib/viewfactor/groove-linsolve";
 
 /**
