@@ -91,15 +91,7 @@ export function personMeanRadiantTemperature(
   person: Readonly<PersonPlacement>,
   surfaces: ReadonlyArray<Readonly<RadiantSurface>>,
 ): MeanRadiantTemperatureResult {
-  const factors = new Array<number>(surfaces.length);
-  const temps = new Array<number>(surfaces.length);
-  for (let i = 0; i < surfaces.length; i++) {
-    const s = surfaces[i] as Readonly<RadiantSurface>;
-    factors[i] = personToRectangle(person, s.polygon);
-    temps[i] = s.temperatureC;
-  }
-  const m = fourthPowerMean(factors, temps);
-  return { mrtC: m.temperatureC, factorSum: m.weightSum, factors };
+  return mrtFromFactors(surfaces, (s) => personToRectangle(person, s.polygon));
 }
 
 /**
@@ -116,14 +108,18 @@ export function sphereMeanRadiantTemperature(
   center: Readonly<Vec3>,
   surfaces: ReadonlyArray<Readonly<RadiantSurface>>,
 ): MeanRadiantTemperatureResult {
-  const factors = new Array<number>(surfaces.length);
-  const temps = new Array<number>(surfaces.length);
-  for (let i = 0; i < surfaces.length; i++) {
-    const s = surfaces[i] as Readonly<RadiantSurface>;
+  return mrtFromFactors(surfaces, (s, i) => {
     assertPolygon(s.polygon, `surfaces[${i}].polygon`);
-    factors[i] = sphereToPolygon(center, s.polygon);
-    temps[i] = s.temperatureC;
-  }
-  const m = fourthPowerMean(factors, temps);
+    return sphereToPolygon(center, s.polygon);
+  });
+}
+
+/** Each surface's factor from `factorOf`, then the normalised fourth-power mean of their temperatures. */
+function mrtFromFactors(
+  surfaces: ReadonlyArray<Readonly<RadiantSurface>>,
+  factorOf: (surface: Readonly<RadiantSurface>, index: number) => number,
+): MeanRadiantTemperatureResult {
+  const factors = surfaces.map(factorOf);
+  const m = fourthPowerMean(factors, surfaces.map((s) => s.temperatureC));
   return { mrtC: m.temperatureC, factorSum: m.weightSum, factors };
 }
