@@ -6,6 +6,7 @@
  */
 import { performance } from "node:perf_hooks";
 import { pmvPpd, type PmvInput, type PmvResult } from "../lib/comfort";
+import { createRng } from "../lib/viewfactor/rng";
 import { iso7730AnnexD } from "./reference/iso7730-annex-d";
 import { median } from "./support";
 
@@ -13,20 +14,10 @@ const ROWS = 100_000;
 const WARMUP_ROUNDS = 3;
 const ROUNDS = 11;
 
-/** Mulberry32 PRNG: deterministic inputs across runs. */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function makeRows(n: number): PmvInput[] {
-  const rnd = mulberry32(7730);
+  const rng = createRng(7730); // deterministic inputs across runs
+  const rnd = () => rng.next();
   const rows: PmvInput[] = new Array<PmvInput>(n);
   for (let i = 0; i < n; i++) {
     // ISO 7730:2005 clause 4.1 ranges.

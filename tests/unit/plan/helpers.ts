@@ -1,16 +1,11 @@
 import { emptyLayout, type Layout, type PlanPoint } from "@/lib/layout/schema";
 import type { RandomSource } from "@/lib/plan/ids";
+import { createRng } from "@/lib/viewfactor/rng";
 
-/** A deterministic pseudo-random source (mulberry32). */
+/** A deterministic pseudo-random source (the project's seeded generator, lib/viewfactor/rng). */
 export function seeded(seed = 1): RandomSource {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const rng = createRng(seed);
+  return () => rng.next();
 }
 
 export const square = (x0: number, y0: number, size: number): PlanPoint[] => [
