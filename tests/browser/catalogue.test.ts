@@ -1,21 +1,13 @@
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { BASE_URL, demoAccount, launchBrowser, screenshot, signInThroughPage } from "@/tests/support/browser";
+import { describe, expect, test } from "vitest";
+import type { Page } from "playwright-core";
+import { BASE_URL, demoAccount, browserForFile, screenshot, signInThroughPage, uniqueRunId } from "@/tests/support/browser";
 import { expectVisible } from "@/tests/browser/helpers";
 import type { Role } from "@/lib/auth/roles";
 import { CATALOGUE_COLUMNS } from "@/lib/catalogue/schema";
 
-let browser: Browser;
+const browser = browserForFile();
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-});
-
-const runId = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e6).toString(36)}`;
+const runId = uniqueRunId();
 const HEADER = CATALOGUE_COLUMNS.join(",");
 
 async function withCatalogue(role: Role, fn: (page: Page) => Promise<void>): Promise<void> {

@@ -6,14 +6,14 @@
  * revisions stay as other tests expect them.
  */
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
-import { BASE_URL, demoAccount, launchBrowser, screenshot, signInThroughPage } from "@/tests/support/browser";
+import type { BrowserContext, Page } from "playwright-core";
+import { BASE_URL, demoAccount, browserForFile, screenshot, signInThroughPage } from "@/tests/support/browser";
 import { expectVisible } from "@/tests/browser/helpers";
 import type { Layout } from "@/lib/layout/schema";
 
 const DEMO_PROJECT = "Quayside House — level 3";
 
-let browser: Browser;
+const browser = browserForFile();
 let context: BrowserContext;
 let page: Page;
 let projectId = "";
@@ -28,7 +28,6 @@ interface SeatResult {
 }
 
 beforeAll(async () => {
-  browser = await launchBrowser();
   context = await browser.newContext({ viewport: { width: 1500, height: 1000 } });
   page = await context.newPage();
   const designer = demoAccount("designer");
@@ -57,7 +56,6 @@ let productId = "";
 afterAll(async () => {
   // The catalogue belongs to the demo organisation: leave it as the seed made it.
   if (productId) await page?.request.delete(`${BASE_URL}/api/catalogue/products/${productId}`).catch(() => undefined);
-  await browser?.close();
 });
 
 describe("automatic louver settings", () => {

@@ -1,10 +1,10 @@
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { eq } from "drizzle-orm";
-import type { Browser, BrowserContext } from "playwright-core";
+import type { BrowserContext } from "playwright-core";
 import { getDb, pool } from "@/db/client";
 import { passwordResets, users } from "@/db/schema";
 import { generateToken, hashToken } from "@/lib/auth/tokens";
-import { BASE_URL, launchBrowser, signInThroughPage } from "@/tests/support/browser";
+import { BASE_URL, browserForFile, signInThroughPage, uniqueRunId } from "@/tests/support/browser";
 import { expectVisible } from "@/tests/browser/helpers";
 
 /**
@@ -13,10 +13,10 @@ import { expectVisible } from "@/tests/browser/helpers";
  * the page needs from it.
  */
 
-let browser: Browser;
+const browser = browserForFile();
 let context: BrowserContext;
 
-const runId = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e6).toString(36)}`;
+const runId = uniqueRunId();
 const email = `reset.${runId}@harbour.example`;
 const oldPassword = "first-password-1";
 const newPassword = "second-password-2";
@@ -33,7 +33,6 @@ async function resetLink(opts: { expiresInMs?: number } = {}): Promise<string> {
 }
 
 beforeAll(async () => {
-  browser = await launchBrowser();
   const setup = await browser.newContext();
   const res = await setup.request.post(`${BASE_URL}/api/auth/sign-up`, {
     data: { name: "Reese Reset", email, password: oldPassword, organisationName: `Reset Works ${runId}` },
@@ -43,7 +42,6 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await browser?.close();
   await pool().end();
 });
 

@@ -4,16 +4,15 @@
  * compute again and see the seat's PMV rise. Screenshots are kept as artifacts.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import type { BrowserContext, Page } from "playwright-core";
 import { WINTER_DESIGN } from "@/lib/scenarios/schema";
-import { BASE_URL, demoAccount, launchBrowser, screenshot, signInThroughPage } from "../support/browser";
+import { BASE_URL, demoAccount, browserForFile, screenshot, signInThroughPage } from "../support/browser";
 
-let browser: Browser;
+const browser = browserForFile();
 let context: BrowserContext;
 let page: Page;
 
 beforeAll(async () => {
-  browser = await launchBrowser();
   context = await browser.newContext({ viewport: { width: 1600, height: 1000 } });
   page = await context.newPage();
   const designer = demoAccount("designer");
@@ -21,7 +20,6 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await browser?.close();
 });
 
 /** Screen position of a plan point, from the view transform the canvas publishes. */

@@ -1,19 +1,18 @@
 import { readFileSync } from "node:fs";
 import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
-import { BASE_URL, demoAccount, launchBrowser, screenshot, signInThroughPage } from "@/tests/support/browser";
+import type { BrowserContext, Page } from "playwright-core";
+import { BASE_URL, demoAccount, browserForFile, screenshot, signInThroughPage } from "@/tests/support/browser";
 import { expectVisible } from "@/tests/browser/helpers";
 
 const DEMO_PROJECT = "Quayside House — level 3";
 
-let browser: Browser;
+const browser = browserForFile();
 let context: BrowserContext;
 let page: Page;
 let projectId = "";
 
 beforeAll(async () => {
-  browser = await launchBrowser();
   context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 1000 } });
   page = await context.newPage();
   const designer = demoAccount("designer");
@@ -26,7 +25,6 @@ beforeAll(async () => {
 afterAll(async () => {
   // The unit setting is stored on the demo designer: leave it as the seed made it.
   await page?.request.patch(`${BASE_URL}/api/me/settings`, { data: { unitSystem: "si" } }).catch(() => undefined);
-  await browser?.close();
 });
 
 const seatsTable = () => page.getByRole("table", { name: "Seats" });

@@ -1,11 +1,11 @@
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
-import { BASE_URL, demoAccount, launchBrowser, screenshot, signInThroughPage } from "@/tests/support/browser";
+import type { BrowserContext, Page } from "playwright-core";
+import { BASE_URL, demoAccount, browserForFile, screenshot, signInThroughPage } from "@/tests/support/browser";
 import { expectVisible } from "@/tests/browser/helpers";
 
 const DEMO_PROJECT = "Quayside House — level 3";
 
-let browser: Browser;
+const browser = browserForFile();
 let projectId = "";
 
 async function signedIn(role: "designer" | "facility_manager"): Promise<{ context: BrowserContext; page: Page }> {
@@ -26,11 +26,9 @@ async function scenarioNames(page: Page): Promise<string[]> {
 }
 
 beforeAll(async () => {
-  browser = await launchBrowser();
 });
 
 afterAll(async () => {
-  await browser?.close();
 });
 
 describe("design scenarios editor", () => {

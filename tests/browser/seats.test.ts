@@ -1,20 +1,12 @@
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import type { Browser, Page } from "playwright-core";
+import { describe, expect, test } from "vitest";
+import type { Page } from "playwright-core";
 import { expectVisible } from "@/tests/browser/helpers";
-import { demoAccount, launchBrowser, screenshot, signInThroughPage } from "@/tests/support/browser";
+import { demoAccount, browserForFile, screenshot, signInThroughPage } from "@/tests/support/browser";
 
 const DEMO_PROJECT = "Quayside House — level 3";
 const SEAT = "Desk B2";
 
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 async function asRole(role: "facility_manager" | "designer" | "occupant", fn: (page: Page) => Promise<void>): Promise<void> {
   const context = await browser.newContext();

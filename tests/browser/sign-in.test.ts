@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { BASE_URL, demoAccount, launchBrowser, screenshot, signInThroughPage } from "@/tests/support/browser";
+import { describe, expect, test } from "vitest";
+import type { Page } from "playwright-core";
+import { BASE_URL, demoAccount, browserForFile, screenshot, signInThroughPage } from "@/tests/support/browser";
 import { expectVisible } from "@/tests/browser/helpers";
 import { DEMO_ORGANISATION } from "@/lib/demo/accounts";
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
@@ -9,15 +9,7 @@ const DEMO_PROJECT = "Quayside House — level 3";
 /** The seed assigns this seat to the demo occupant. */
 const OCCUPANT_SEAT = "Desk A4";
 
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 async function withPage(fn: (page: Page) => Promise<void>): Promise<void> {
   const context = await browser.newContext();

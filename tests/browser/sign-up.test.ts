@@ -1,20 +1,11 @@
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import type { Browser } from "playwright-core";
-import { BASE_URL, launchBrowser, screenshot } from "@/tests/support/browser";
+import { describe, expect, test } from "vitest";
+
+import { BASE_URL, browserForFile, screenshot, uniqueRunId } from "@/tests/support/browser";
 import { expectVisible } from "@/tests/browser/helpers";
 
-let browser: Browser;
+const browser = browserForFile();
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-});
-
-/** Unique per run, so the test passes again on the same database. */
-const runId = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e6).toString(36)}`;
+const runId = uniqueRunId();
 
 describe("sign-up", () => {
   test("creates an organisation, lands on /projects with its name, and its first project can be created", async () => {

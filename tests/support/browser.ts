@@ -4,7 +4,8 @@
  */
 import { mkdirSync } from "node:fs";
 import path from "node:path";
-import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll } from "vitest";
+import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import { DEMO_ACCOUNTS } from "@/lib/demo/accounts";
 import type { Role } from "@/lib/auth/roles";
 
@@ -29,6 +30,31 @@ export async function launchBrowser(): Promise<Browser> {
       // temporary profile of its own.
     ],
   });
+}
+
+/**
+ * One browser for a test file: launched before its tests, closed after them. Call at the top
+ * level of the file; the tests open their own contexts (cookie jars) from it.
+ */
+export function browserForFile(): { newContext(options?: Parameters<Browser["newContext"]>[0]): Promise<BrowserContext> } {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return {
+    newContext(options) {
+      if (!browser) throw new Error("browserForFile: the browser starts in beforeAll; open contexts inside tests or hooks");
+      return browser.newContext(options);
+    },
+  };
+}
+
+/** Unique per run (base-36 time and a random part), so a test passes again on the same database. */
+export function uniqueRunId(): string {
+  return `${Date.now().toString(36)}${Math.floor(Math.random() * 1e6).toString(36)}`;
 }
 
 export function demoAccount(role: Role) {
