@@ -9,6 +9,7 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { FormAlert } from "@/components/ui/form-alert";
 import { FormField } from "@/components/ui/form-field";
+import { NewPasswordField } from "@/components/auth/new-password-field";
 import { applyApiError } from "@/components/ui/api-errors";
 import { acceptInviteInput, type AcceptInviteInput } from "@/lib/auth/schemas";
 import { api } from "@/lib/client/query";
@@ -58,14 +59,7 @@ function NewAccountForm({ token }: { token: string }) {
       })}
     >
       <FormField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
-      <FormField
-        label="Password"
-        type="password"
-        autoComplete="new-password"
-        hint="At least 10 characters."
-        error={errors.password?.message}
-        {...form.register("password")}
-      />
+      <NewPasswordField error={errors.password?.message} {...form.register("password")} />
       <FormAlert>{message}</FormAlert>
       <Button type="submit" className="w-full" pending={accept.isPending || accept.isSuccess}>
         Join organisation

@@ -8,7 +8,7 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { FormAlert } from "@/components/ui/form-alert";
-import { FormField } from "@/components/ui/form-field";
+import { NewPasswordField } from "@/components/auth/new-password-field";
 import { applyApiError } from "@/components/ui/api-errors";
 import { passwordResetConfirmInput } from "@/lib/auth/schemas";
 import { api, ApiError } from "@/lib/client/query";
@@ -55,14 +55,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
         confirm.mutate(values);
       })}
     >
-      <FormField
-        label="New password"
-        type="password"
-        autoComplete="new-password"
-        hint="At least 10 characters. Every device signed in to your account is signed out."
-        error={errors.password?.message}
-        {...form.register("password")}
-      />
+      <NewPasswordField label="New password" note="Every device signed in to your account is signed out." error={errors.password?.message} {...form.register("password")} />
       <FormAlert>{message}</FormAlert>
       {linkDead ? (
         <Link href="/forgot-password" className="block text-sm text-accent-strong hover:underline">

@@ -10,6 +10,7 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { FormAlert } from "@/components/ui/form-alert";
 import { FormField } from "@/components/ui/form-field";
+import { NewPasswordField } from "@/components/auth/new-password-field";
 import { applyApiError } from "@/components/ui/api-errors";
 import { signUpInput } from "@/lib/auth/schemas";
 import { api } from "@/lib/client/query";
@@ -44,14 +45,7 @@ export function SignUpForm() {
     >
       <FormField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
       <FormField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
-      <FormField
-        label="Password"
-        type="password"
-        autoComplete="new-password"
-        hint="At least 10 characters."
-        error={errors.password?.message}
-        {...form.register("password")}
-      />
+      <NewPasswordField error={errors.password?.message} {...form.register("password")} />
       <FormField
         label="Organisation name"
         autoComplete="organization"

@@ -3,10 +3,13 @@ import { z } from "zod";
 import { ROLES } from "@/lib/auth/roles";
 
 export const email = z.email("enter a valid e-mail address").max(254).transform((s) => s.trim().toLowerCase());
+/** Shortest and longest new password, characters (forms show the minimum as a hint). */
+export const NEW_PASSWORD_MIN_CHARS = 10;
+export const NEW_PASSWORD_MAX_CHARS = 128;
 export const newPassword = z
   .string()
-  .min(10, "use at least 10 characters")
-  .max(128, "use at most 128 characters");
+  .min(NEW_PASSWORD_MIN_CHARS, `use at least ${NEW_PASSWORD_MIN_CHARS} characters`)
+  .max(NEW_PASSWORD_MAX_CHARS, `use at most ${NEW_PASSWORD_MAX_CHARS} characters`);
 const personName = z.string().trim().min(1, "enter a name").max(120);
 
 export const signInInput = z.strictObject({ email, password: z.string().min(1, "enter your password").max(128) });
