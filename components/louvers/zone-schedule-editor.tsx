@@ -2,27 +2,14 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect, useId } from "react";
-import { useFieldArray, useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-form";
+import { useFieldArray, useForm, useWatch, type Resolver } from "react-hook-form";
 import { NEW_PERIOD, scheduleFormSchema, scheduleToForm, type ScheduleForm } from "@/components/louvers/schedule-form";
 import { Button } from "@/components/ui/button";
 import type { ZoneSchedule } from "@/lib/energy/schedule-schema";
 import { WEEKDAYS } from "@/lib/energy/types";
+import { asNumber, errorAt } from "@/components/ui/form-values";
 
 const DAY_LABELS: Record<string, string> = { mon: "Mon", tue: "Tue", wed: "Wed", thu: "Thu", fri: "Fri", sat: "Sat", sun: "Sun" };
-
-/** Blank → NaN, so the schema names the field instead of reading 0. */
-const asNumber = (v: unknown) => (v === "" || v === null || v === undefined ? Number.NaN : Number(v));
-
-/** The message at a dotted path of react-hook-form's errors (the layout schema's paths). */
-function errorAt(errors: FieldErrors, path: string): string | undefined {
-  let node: unknown = errors;
-  for (const key of path.split(".")) {
-    if (node === null || typeof node !== "object") return undefined;
-    node = (node as Record<string, unknown>)[key];
-  }
-  const message = (node as { message?: unknown } | undefined)?.message;
-  return typeof message === "string" ? message : undefined;
-}
 
 const CONTROL = "block w-full rounded-md border border-line bg-white px-2 py-1.5 text-sm aria-[invalid=true]:border-danger";
 

@@ -17,20 +17,7 @@ import {
   type OpeningForm, type PanelForm, type RoomForm, type SeatForm, type ZoneForm,
 } from "@/lib/plan/forms";
 import { unitSymbol, type UnitSystem } from "@/lib/units";
-
-/** Blank → null for optional numbers, NaN (and a schema error) for required ones. */
-const asNumber = (v: unknown) => (v === "" || v === null || v === undefined ? Number.NaN : Number(v));
-const asNumberOrNull = (v: unknown) => (v === "" || v === null || v === undefined ? null : Number(v));
-
-function errorAt(errors: FieldErrors, path: string): string | undefined {
-  let node: unknown = errors;
-  for (const key of path.split(".")) {
-    if (node === null || typeof node !== "object") return undefined;
-    node = (node as Record<string, unknown>)[key];
-  }
-  const message = (node as { message?: unknown } | undefined)?.message;
-  return typeof message === "string" ? message : undefined;
-}
+import { asNumber, asNumberOrNull, errorAt } from "@/components/ui/form-values";
 
 interface NumberProps<F extends FieldValues> {
   name: Path<F>;
