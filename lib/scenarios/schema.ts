@@ -113,6 +113,18 @@ export function withLoadDefaults(conditions: ScenarioConditions): ResolvedScenar
   };
 }
 
+/**
+ * The building both design scenarios describe: exterior walls and glazing from their U-values
+ * (invented, typical of a recent office), the other surfaces at the air temperature.
+ */
+const OFFICE_ENVELOPE: ScenarioConditions["surfaces"] = {
+  exteriorWalls: { kind: "uValue", uValueWm2K: 0.3 },
+  interiorWalls: null,
+  floor: null,
+  ceiling: null,
+  openings: { kind: "uValue", uValueWm2K: 1.4 },
+};
+
 /** The two design scenarios every new demo project gets (invented values typical of an office). */
 export const WINTER_DESIGN: ScenarioInput = {
   name: "Winter design",
@@ -124,13 +136,7 @@ export const WINTER_DESIGN: ScenarioInput = {
     defaultMet: 1.2,
     outdoorTemperatureC: -8,
     activeModes: ["heating"],
-    surfaces: {
-      exteriorWalls: { kind: "uValue", uValueWm2K: 0.3 },
-      interiorWalls: null,
-      floor: null,
-      ceiling: null,
-      openings: { kind: "uValue", uValueWm2K: 1.4 },
-    },
+    surfaces: OFFICE_ENVELOPE,
     airChangesPerHour: 0.5,
     waterTemperatureDropK: { heating: 5, cooling: 3 },
   },
@@ -146,13 +152,7 @@ export const SUMMER_DESIGN: ScenarioInput = {
     defaultMet: 1.2,
     outdoorTemperatureC: 32,
     activeModes: ["cooling"],
-    surfaces: {
-      exteriorWalls: { kind: "uValue", uValueWm2K: 0.3 },
-      interiorWalls: null,
-      floor: null,
-      ceiling: null,
-      openings: { kind: "uValue", uValueWm2K: 1.4 },
-    },
+    surfaces: OFFICE_ENVELOPE,
     airChangesPerHour: 0.7,
     // Open-plan office: one person per desk, about 10 W/m² of IT equipment and 8 W/m² of LED lighting (invented, typical values).
     internalGains: { occupants: { kind: "seats" }, sensibleWPerPerson: 70, equipmentWm2: 10, lightingWm2: 8 },
