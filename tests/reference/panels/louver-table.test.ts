@@ -29,18 +29,7 @@ import {
   type LouverFinish,
 } from "@/lib/panels";
 import { grooveEmissivityDiffuseRadiosity, grooveEmissivitySpecularUnfolded } from "@/lib/viewfactor";
-
-/** Closed form for a specular V-groove at α = 180°/n (image polygon + crossed strings), computed here. */
-function specularClosedForm(n: number, emissivity: number): number {
-  const alpha = Math.PI / n;
-  const k = 2 * n;
-  let total = 0;
-  for (let m = 1; m < k; m++) {
-    const f = (2 * Math.sin((m * alpha) / 2) - Math.sin(((m - 1) * alpha) / 2) - Math.sin(((m + 1) * alpha) / 2)) / (2 * Math.sin(alpha / 2));
-    total += f * (1 - Math.pow(1 - emissivity, Math.min(m, k - m)));
-  }
-  return total;
-}
+import { specularClosedForm } from "@/tests/reference/viewfactor/grooveFormulas";
 
 /** Direct (non-tabulated) apparent hemispherical emissivity from the finish's deterministic solver. */
 function direct(finish: LouverFinish, openingAngleDeg: number, wallEmissivity: number): number {

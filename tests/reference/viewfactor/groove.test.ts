@@ -33,6 +33,7 @@ import {
   parallelPlateChannelEmissivity,
   traceGroove,
 } from "@/lib/viewfactor";
+import { specularClosedForm } from "./grooveFormulas";
 
 const ANGLES_DEG = [10, 20, 30, 45, 60, 90, 120, 150, 180];
 const EMISSIVITIES = [0.1, 0.3, 0.5, 0.7, 0.9];
@@ -41,24 +42,6 @@ const GRID_RAYS = 50_000;
 
 /** Lambert shares of the folded 10° bins, computed here from sin differences (Lambert's cosine law, common practice). */
 const LAMBERT = Array.from({ length: 9 }, (_, k) => Math.sin(((k + 1) * 10 * Math.PI) / 180) - Math.sin((k * 10 * Math.PI) / 180));
-
-/**
- * Closed form for a specular V-groove of opening angle α = 180°/n (computed
- * independently here): images close into a regular k-gon (k = 2n) inscribed
- * in the unit circle; chord m's share is the crossed-string view factor
- * F(0→m) = [2 sin(mα/2) − sin((m−1)α/2) − sin((m+1)α/2)] / (2 sin(α/2)),
- * and a ray leaving through chord m was reflected min(m, k − m) times.
- */
-function specularClosedForm(n: number, emissivity: number): number {
-  const alpha = Math.PI / n;
-  const k = 2 * n;
-  let total = 0;
-  for (let m = 1; m < k; m++) {
-    const f = (2 * Math.sin((m * alpha) / 2) - Math.sin(((m - 1) * alpha) / 2) - Math.sin(((m + 1) * alpha) / 2)) / (2 * Math.sin(alpha / 2));
-    total += f * (1 - Math.pow(1 - emissivity, Math.min(m, k - m)));
-  }
-  return total;
-}
 
 interface Comparison {
   label: string;
