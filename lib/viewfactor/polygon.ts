@@ -4,7 +4,17 @@
  * A polygon is `ReadonlyArray<Vec3>`: the vertices (m) of a planar convex
  * polygon, in order, either winding.
  */
-import type { Vec3 } from "./vec3";
+import { crossVec3, dotVec3, lengthVec3, subVec3, type Vec3 } from "./vec3";
+
+/** Scratch vectors of the triangle helpers (no allocation per call). */
+const edgeU: Vec3 = [0, 0, 0];
+const edgeV: Vec3 = [0, 0, 0];
+const cross: Vec3 = [0, 0, 0];
+
+/** (p1 − p0) × (p2 − p0): twice the triangle's vector area (m²), into `out`. */
+function triangleVectorArea2(p0: Readonly<Vec3>, p1: Readonly<Vec3>, p2: Readonly<Vec3>, out: Vec3): Vec3 {
+  return crossVec3(subVec3(p1, p0, edgeU), subVec3(p2, p0, edgeV), out);
+}
 
 /**
  * Throws `RangeError` unless `polygon` has at least 3 vertices, each of length
@@ -74,13 +84,7 @@ export function polygonArea(polygon: ReadonlyArray<Readonly<Vec3>>): number {
  * No checks and no allocation: for inner loops (the caller validates the points).
  */
 export function triangleArea(p0: Readonly<Vec3>, p1: Readonly<Vec3>, p2: Readonly<Vec3>): number {
-  const ux = p1[0] - p0[0];
-  const uy = p1[1] - p0[1];
-  const uz = p1[2] - p0[2];
-  const vx = p2[0] - p0[0];
-  const vy = p2[1] - p0[1];
-  const vz = p2[2] - p0[2];
-  return 0.5 * Math.hypot(uy * vz - uz * vy, uz * vx - ux * vz, ux * vy - uy * vx);
+  return 0.5 * lengthVec3(triangleVectorArea2(p0, p1, p2, cross));
 }
 
 /**
@@ -122,14 +126,8 @@ export function polygonCentroid(polygon: ReadonlyArray<Readonly<Vec3>>, out: Vec
   for (let i = 1; i + 1 < polygon.length; i++) {
     const p1 = polygon[i] as Readonly<Vec3>;
     const p2 = polygon[i + 1] as Readonly<Vec3>;
-    const ux = p1[0] - p0[0];
-    const uy = p1[1] - p0[1];
-    const uz = p1[2] - p0[2];
-    const vx = p2[0] - p0[0];
-    const vy = p2[1] - p0[1];
-    const vz = p2[2] - p0[2];
     // Signed (twice) triangle area projected on the polygon normal.
-    const w = normal[0] * (uy * vz - uz * vy) + normal[1] * (uz * vx - ux * vz) + normal[2] * (ux * vy - uy * vx);
+    const w = dotVec3(normal, triangleVectorArea2(p0, p1, p2, cross));
     cx += w * (p0[0] + p1[0] + p2[0]);
     cy += w * (p0[1] + p1[1] + p2[1]);
     cz += w * (p0[2] + p1[2] + p2[2]);
